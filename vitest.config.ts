@@ -1,0 +1,25 @@
+import { defineConfig } from 'vitest/config'
+import { defineVitestProject } from '@nuxt/test-utils/config'
+
+// Three projects: pure functions, components in a Nuxt environment, and the HTTP API against a
+// built server on the real PostgreSQL (one build per run, started in the global setup).
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        test: {
+          name: 'unit',
+          include: ['tests/unit/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      await defineVitestProject({
+        test: {
+          name: 'nuxt',
+          include: ['tests/nuxt/**/*.test.ts'],
+          environment: 'nuxt',
+        },
+      }),
+    ],
+  },
+})
