@@ -1,0 +1,23 @@
+// Demo data: an invented farm and season. Runs at start when the database has no farms.
+import { drizzle } from 'drizzle-orm/node-postgres'
+import pg from 'pg'
+import * as schema from '../../server/db/schema'
+import { seedAccounts } from './accounts'
+
+export type SeedDb = ReturnType<typeof drizzle<typeof schema>>
+
+export async function seedDemo(url: string) {
+  const pool = new pg.Pool({ connectionString: url, max: 2 })
+  const db = drizzle(pool, { schema, casing: 'snake_case' })
+  try {
+    const existing = await db.select({ id: schema.farms.id }).from(schema.farms).limit(1)
+    if (existing.length) return false
+    await db.transaction(async (tx) => {
+      const accounts = await seedAccounts(tx as unknown as SeedDb)
+      void accounts
+    })
+    return true
+  } finally {
+    await pool.end()
+  }
+}

@@ -1,0 +1,5 @@
+import { listMembers } from '../../services/accounts'
+export default defineEventHandler(async (event) => {
+  const member = await requireMember(event)
+  return listMembers(member.farmId)
+})

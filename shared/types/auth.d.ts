@@ -1,0 +1,12 @@
+declare module '#auth-utils' {
+  interface User {
+    id: number
+    email: string
+    name: string
+  }
+  interface UserSession {
+    farmId: number | null
+  }
+}
+
+export {}
