@@ -20,6 +20,17 @@ export default defineConfig({
           environment: 'nuxt',
         },
       }),
+      {
+        test: {
+          name: 'api',
+          include: ['tests/api/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/api/global-setup.ts'],
+          testTimeout: 30_000,
+          hookTimeout: 120_000,
+          fileParallelism: false,
+        },
+      },
     ],
   },
 })

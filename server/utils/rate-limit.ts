@@ -1,9 +1,13 @@
+import type { H3Event } from 'h3'
+
 // Failed sign-in attempts per key in a sliding window (per instance; behind several instances the
 // limit applies per instance, which still bounds guessing).
 const WINDOW_MS = 15 * 60_000
 const attempts = new Map<string, number[]>()
 
-export const LOGIN_FAILURES_ALLOWED = Number(process.env.ROWBENCH_LOGIN_LIMIT || 10)
+const PER_EMAIL = Number(process.env.ROWBENCH_LOGIN_LIMIT || 10)
+// One address may be a whole farm office behind NAT, so it gets more room than one account.
+const PER_IP = Number(process.env.ROWBENCH_LOGIN_IP_LIMIT || 50)
 
 function recent(key: string, now: number) {
   const list = (attempts.get(key) ?? []).filter((t) => now - t < WINDOW_MS)
@@ -11,17 +15,24 @@ function recent(key: string, now: number) {
   return list
 }
 
-export function isLimited(keys: string[]) {
-  const now = Date.now()
-  return keys.some((k) => recent(k, now).length >= LOGIN_FAILURES_ALLOWED)
+export function loginKeys(event: H3Event, email: string) {
+  const trustProxy = process.env.ROWBENCH_TRUST_PROXY === '1'
+  const ip = getRequestIP(event, { xForwardedFor: trustProxy }) ?? 'unknown'
+  return { email: `email:${email}`, ip: `ip:${ip}` }
 }
 
-export function recordFailure(keys: string[]) {
+export function isLimited(keys: { email: string, ip: string }) {
+  const now = Date.now()
+  return recent(keys.email, now).length >= PER_EMAIL || recent(keys.ip, now).length >= PER_IP
+}
+
+export function recordFailure(keys: { email: string, ip: string }) {
   const now = Date.now()
   if (attempts.size > 50_000) attempts.clear()
-  for (const k of keys) recent(k, now).push(now)
+  recent(keys.email, now).push(now)
+  recent(keys.ip, now).push(now)
 }
 
-export function clearFailures(keys: string[]) {
-  for (const k of keys) attempts.delete(k)
+export function clearFailures(key: string) {
+  attempts.delete(key)
 }

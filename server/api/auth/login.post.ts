@@ -2,8 +2,7 @@ import { loginBody } from '#shared/schemas/auth'
 import { farmsOfUser, findUserByEmail } from '../../services/accounts'
 export default defineEventHandler(async (event) => {
   const body = await validBody(event, loginBody)
-  const ip = getRequestIP(event, { xForwardedFor: true }) ?? 'unknown'
-  const keys = [`email:${body.email}`, `ip:${ip}`]
+  const keys = loginKeys(event, body.email)
   if (isLimited(keys)) {
     setResponseHeader(event, 'Retry-After', 900)
     throw createError({ statusCode: 429, message: 'Too many failed sign-in attempts. Wait 15 minutes and try again, or reset your password.' })
@@ -14,7 +13,7 @@ export default defineEventHandler(async (event) => {
     recordFailure(keys)
     throw createError({ statusCode: 401, message: 'E-mail or password is not right' })
   }
-  clearFailures([`email:${body.email}`])
+  clearFailures(keys.email)
   const farms = await farmsOfUser(user.id)
   await setUserSession(event, { user: { id: user.id, email: user.email, name: user.name }, farmId: farms[0]?.id ?? null })
   return { user: { id: user.id, email: user.email, name: user.name }, farms, farmId: farms[0]?.id ?? null }

@@ -1,0 +1,20 @@
+import type { TestProject } from 'vitest/node'
+// @ts-expect-error plain ESM helper without types
+import { startTestServer } from '../../scripts/lib/test-server.mjs'
+
+// One built server on a fresh test database for every API test file.
+export default async function setup(project: TestProject) {
+  const server = await startTestServer({ database: 'rowbench_test', port: 3097, smtpPort: 2597 })
+  project.provide('baseUrl', server.baseUrl)
+  project.provide('databaseUrl', server.databaseUrl)
+  project.provide('mailbox', server.mailbox)
+  return async () => server.stop()
+}
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseUrl: string
+    databaseUrl: string
+    mailbox: string
+  }
+}
