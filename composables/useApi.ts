@@ -15,7 +15,7 @@ export function useApi() {
   const toast = useToast()
   async function call<T>(url: string, options: Parameters<typeof $fetch>[1] = {}): Promise<T> {
     try {
-      return await $fetch<T>(url, options as never)
+      return await ($fetch as unknown as (u: string, o: unknown) => Promise<T>)(url, options)
     } catch (err) {
       const { message, status } = apiError(err)
       if (status === 401 && import.meta.client) {

@@ -1,5 +1,4 @@
 import type { TestProject } from 'vitest/node'
-// @ts-expect-error plain ESM helper without types
 import { startTestServer } from '../../scripts/lib/test-server.mjs'
 
 // One built server on a fresh test database for every API test file.

@@ -1,0 +1,12 @@
+#!/usr/bin/env node
+// Serves the built app for Playwright on a freshly seeded database of its own.
+import { startTestServer } from './lib/test-server.mjs'
+
+const port = Number(process.argv[2] || 3096)
+const server = await startTestServer({ database: 'rowbench_e2e', port, smtpPort: port - 1000, seed: true, env: { ROWBENCH_LOGIN_IP_LIMIT: '1000' } })
+const stop = async () => {
+  await server.stop()
+  process.exit(0)
+}
+process.on('SIGTERM', stop)
+process.on('SIGINT', stop)
