@@ -1,6 +1,6 @@
 import { defineConfig, devices } from '@playwright/test'
 
-const port = Number(process.env.ROWBENCH_E2E_PORT || 3096)
+const port = 3096 + Number(process.env.ROWBENCH_SLOT || 0) * 10
 
 // Debian's chromium; the same production build the API tests use, on a seeded database of its own.
 export default defineConfig({
@@ -24,7 +24,7 @@ export default defineConfig({
     { name: 'desktop', use: { ...devices['Desktop Chrome'], channel: undefined } },
   ],
   webServer: {
-    command: `node scripts/e2e-server.mjs ${port}`,
+    command: 'node scripts/e2e-server.mjs',
     url: `http://127.0.0.1:${port}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,

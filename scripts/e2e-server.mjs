@@ -1,9 +1,9 @@
 #!/usr/bin/env node
 // Serves the built app for Playwright on a freshly seeded database of its own.
 import { startTestServer } from './lib/test-server.mjs'
+import { e2ePort, e2eSmtpPort, suffix } from './lib/slot.mjs'
 
-const port = Number(process.argv[2] || 3096)
-const server = await startTestServer({ database: 'rowbench_e2e', port, smtpPort: port - 1000, seed: true, env: { ROWBENCH_LOGIN_IP_LIMIT: '1000' } })
+const server = await startTestServer({ database: `rowbench_e2e${suffix}`, port: e2ePort, smtpPort: e2eSmtpPort, seed: true, env: { ROWBENCH_LOGIN_IP_LIMIT: '1000' } })
 const stop = async () => {
   await server.stop()
   process.exit(0)

@@ -1,1 +1,3 @@
 export * from './accounts'
+export * from './equipment'
+export * from './setups'
