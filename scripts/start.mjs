@@ -12,16 +12,17 @@ const { ensureBuild } = await import('./lib/build.mjs')
 const { sessionSecret } = await import('./lib/secret.mjs')
 const { startFakeSmtp } = await import('./lib/fake-smtp.mjs')
 const { createJiti } = await import('jiti')
+const { SLOT, suffix } = await import('./lib/slot.mjs')
 
 const host = process.env.HOST || '127.0.0.1'
-const port = Number(process.env.PORT || 3000)
+const port = Number(process.env.PORT || 3000 + SLOT * 10)
 const env = { ...process.env, HOST: host, PORT: String(port), NITRO_HOST: host, NITRO_PORT: String(port) }
 
 let databaseUrl = process.env.DATABASE_URL
 if (!databaseUrl) {
   dbUp()
-  ensureDatabase('rowbench')
-  databaseUrl = localUrl('rowbench')
+  ensureDatabase(`rowbench${suffix}`)
+  databaseUrl = localUrl(`rowbench${suffix}`)
 }
 env.DATABASE_URL = databaseUrl
 
@@ -37,7 +38,7 @@ const { seedDemo } = await jiti.import('./seed/index.ts')
 if (await seedDemo(databaseUrl)) console.log('[rowbench] demo data seeded')
 
 if (!process.env.SMTP_URL) {
-  const smtpPort = Number(process.env.ROWBENCH_SMTP_PORT || 2526)
+  const smtpPort = Number(process.env.ROWBENCH_SMTP_PORT || 2526 + SLOT * 10)
   const mailbox = resolve(root, '.data/mailbox')
   await startFakeSmtp({ port: smtpPort, dir: mailbox })
   env.NUXT_SMTP_URL = `smtp://127.0.0.1:${smtpPort}`
