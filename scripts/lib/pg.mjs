@@ -32,6 +32,7 @@ function findBinDir() {
 
 // The postgres OS user must be able to reach the data folder; a private temp checkout may not allow it.
 function dataRoot() {
+  if (process.env.ROWBENCH_PG_DIR) return process.env.ROWBENCH_PG_DIR
   const inTree = resolve(root, '.data')
   if (!isRoot) return inTree
   mkdirSync(inTree, { recursive: true })
