@@ -35,7 +35,7 @@ async function lookupRole(userId: number, farmId: number) {
 
 // Guard for every farm route: a session (401) and a membership of the current farm (403).
 export async function requireMember(event: H3Event): Promise<Member> {
-  const session = await requireUserSession(event, { message: 'Sign in to continue' })
+  const session = await requireSessionUser(event)
   const farmId = session.farmId
   if (!farmId) throw createError({ statusCode: 403, message: 'You are not a member of any farm yet' })
   const { role, farmName } = await lookupRole(session.user.id, farmId)
