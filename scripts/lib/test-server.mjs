@@ -1,5 +1,6 @@
 // Starts the built server against a database of its own, with its own fake SMTP, for tests.
 import { spawn } from 'node:child_process'
+import { createServer } from 'node:net'
 import { mkdtempSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join, resolve } from 'node:path'
@@ -22,7 +23,24 @@ export async function waitForHttp(url, timeoutMs = 60_000) {
   throw new Error(`server at ${url} did not answer within ${timeoutMs} ms`)
 }
 
-export async function startTestServer({ database, port, smtpPort, seed = false, env: extra = {} }) {
+// The preferred port when it is free, else any free one (another run may hold it).
+export function freePort(preferred) {
+  return new Promise((resolvePort) => {
+    const srv = createServer()
+    srv.once('error', () => {
+      const any = createServer()
+      any.listen(0, '127.0.0.1', () => {
+        const { port } = any.address()
+        any.close(() => resolvePort(port))
+      })
+    })
+    srv.listen(preferred, '127.0.0.1', () => srv.close(() => resolvePort(preferred)))
+  })
+}
+
+export async function startTestServer({ database, port: wantPort, smtpPort: wantSmtp, seed = false, env: extra = {} }) {
+  const port = await freePort(wantPort)
+  const smtpPort = await freePort(wantSmtp)
   dbUp()
   ensureDatabase(database, { fresh: true })
   const databaseUrl = localUrl(database)
