@@ -1,0 +1,119 @@
+import Decimal from 'decimal.js'
+import convert from 'convert-units'
+
+export const SQ_IN_PER_ACRE = 6_272_640 // 43,560 ft² × 144 in²/ft² (L. H. Bailey, Farm and Garden Rule-Book)
+export const SQ_FT_PER_ACRE = 43_560
+const IN_PER_S_PER_MPH = new Decimal(63_360).div(3600) // 17.6 in/s per mph
+// Rule of thumb, no published source: plate meters singulate less reliably above about 50 rpm.
+export const DEFAULT_PLATE_RPM_LIMIT = 50
+
+export interface DriveStageTeeth { driverTeeth: number, drivenTeeth: number }
+
+export interface MeterInput {
+  wheelCircumferenceIn: number
+  slipPercent: number
+  stages: DriveStageTeeth[]
+  meterRatio: number
+  cellsPerPlate: number
+  rowSpacingIn: number
+  speedMph?: number
+  plateRpmLimit?: number
+}
+
+export interface MeterResult {
+  plateRevsPerWheelRev: number
+  seedsPerWheelRev: number
+  seedSpacingIn: number
+  seedsPerAcre: number
+  seedsPerFoot: number
+  seedsPerSecond?: number
+  plateRpm?: number
+  plateRpmWarning?: string
+}
+
+// R = Π(driver ÷ driven) × meter ratio: plate revolutions per drive-wheel revolution.
+export function driveRatio(stages: DriveStageTeeth[], meterRatio: number): Decimal {
+  return stages.reduce((r, s) => r.mul(s.driverTeeth).div(s.drivenTeeth), new Decimal(meterRatio))
+}
+
+// spacing (in) = circumference ÷ (cells × R × (1 − slip/100)); seeds/acre = 6,272,640 ÷ (row in × spacing in).
+// Slip means the planter travels farther than the wheel rolls, so it widens the spacing.
+export function computeMeter(input: MeterInput): MeterResult {
+  const r = driveRatio(input.stages, input.meterRatio)
+  const seedsPerWheelRev = r.mul(input.cellsPerPlate)
+  const rolling = new Decimal(1).minus(new Decimal(input.slipPercent).div(100))
+  const seedSpacingIn = new Decimal(input.wheelCircumferenceIn).div(seedsPerWheelRev.mul(rolling))
+  const seedsPerAcre = new Decimal(SQ_IN_PER_ACRE).div(new Decimal(input.rowSpacingIn).mul(seedSpacingIn))
+  const result: MeterResult = {
+    plateRevsPerWheelRev: r.toNumber(),
+    seedsPerWheelRev: seedsPerWheelRev.toNumber(),
+    seedSpacingIn: seedSpacingIn.toNumber(),
+    seedsPerAcre: seedsPerAcre.toNumber(),
+    seedsPerFoot: new Decimal(12).div(seedSpacingIn).toNumber(),
+  }
+  if (input.speedMph !== undefined && input.speedMph > 0) {
+    const seedsPerSecond = IN_PER_S_PER_MPH.mul(input.speedMph).div(seedSpacingIn)
+    const plateRpm = seedsPerSecond.mul(60).div(input.cellsPerPlate)
+    result.seedsPerSecond = seedsPerSecond.toNumber()
+    result.plateRpm = plateRpm.toNumber()
+    const limit = input.plateRpmLimit ?? DEFAULT_PLATE_RPM_LIMIT
+    if (plateRpm.gt(limit)) {
+      result.plateRpmWarning = `The plate turns at ${plateRpm.toFixed(1)} rpm, above the ${limit} rpm limit set for this check: slow down or use a plate with more cells.`
+    }
+  }
+  return result
+}
+
+// Circumference = distance ÷ revolutions (University of Kentucky: 10 revolutions in 50 ft → 60 in).
+export function rollingCircumferenceFromRun(input: { revolutions: number, distanceFt: number }): number {
+  return new Decimal(input.distanceFt).mul(12).div(input.revolutions).toNumber()
+}
+
+// Length of row (ft) whose area is a fraction of an acre: 43,560 × fraction ÷ (row spacing in ÷ 12).
+export function rowLengthForFraction(input: { rowSpacingIn: number, fractionOfAcre?: number }): { lengthFt: number, feet: number, inches: number } {
+  const lengthFt = new Decimal(SQ_FT_PER_ACRE).mul(input.fractionOfAcre ?? 0.001).div(new Decimal(input.rowSpacingIn).div(12))
+  let feet = lengthFt.floor().toNumber()
+  let inches = lengthFt.minus(feet).mul(12).toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber()
+  if (inches === 12) {
+    feet += 1
+    inches = 0
+  }
+  return { lengthFt: lengthFt.toNumber(), feet, inches }
+}
+
+// Seeds per acre = harvest stand ÷ (germination × survival) (Ohio State University, Thomison).
+export function seedingRateForStand(input: { targetStand: number, germinationPercent: number, survivalPercent: number }): { seedsPerAcre: number } {
+  const seedsPerAcre = new Decimal(input.targetStand).div(new Decimal(input.germinationPercent).div(100)).div(new Decimal(input.survivalPercent).div(100))
+  return { seedsPerAcre: seedsPerAcre.toNumber() }
+}
+
+// Seeds per foot = (seeds per acre ÷ 43,560) × (row spacing in ÷ 12) (Iowa State University, Agron 212).
+export function seedsPerFootFromRate(input: { seedsPerAcre: number, rowSpacingIn: number }): number {
+  return new Decimal(input.seedsPerAcre).div(SQ_FT_PER_ACRE).mul(new Decimal(input.rowSpacingIn).div(12)).toNumber()
+}
+
+export function seedsPerAcreFromFoot(input: { seedsPerFoot: number, rowSpacingIn: number }): number {
+  return new Decimal(input.seedsPerFoot).mul(SQ_FT_PER_ACRE).div(new Decimal(input.rowSpacingIn).div(12)).toNumber()
+}
+
+// Slip implied by a count: 1 − counted ÷ expected-at-zero-slip, in percent.
+export function impliedSlipPercent(input: { expectedSeedsPerAcreNoSlip: number, countedSeedsPerAcre: number }): number {
+  return new Decimal(1).minus(new Decimal(input.countedSeedsPerAcre).div(input.expectedSeedsPerAcreNoSlip)).mul(100).toNumber()
+}
+
+export function toMetricPopulation(input: { seedsPerAcre: number, seedSpacingIn: number }): { seedsPerHectare: number, seedSpacingCm: number } {
+  const acresPerHectare = convert(1).from('ha').to('ac')
+  return {
+    seedsPerHectare: new Decimal(input.seedsPerAcre).mul(acresPerHectare).toNumber(),
+    seedSpacingCm: convert(input.seedSpacingIn).from('in').to('cm'),
+  }
+}
+
+// Display rounding only; computations keep full precision.
+export function roundTo(value: number, digits = 0): number {
+  return new Decimal(value).toDecimalPlaces(digits, Decimal.ROUND_HALF_UP).toNumber()
+}
+
+export function formatFeetInches(feet: number, inches: number): string {
+  return `${feet} ft ${inches} in`
+}
