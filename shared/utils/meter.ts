@@ -1,9 +1,11 @@
 import Decimal from 'decimal.js'
 import convert from 'convert-units'
 
-export const SQ_IN_PER_ACRE = 6_272_640 // 43,560 ft² × 144 in²/ft² (L. H. Bailey, Farm and Garden Rule-Book)
+// Square inches in an acre: 43,560 ft² × 144 (L. H. Bailey, Farm and Garden Rule-Book).
+export const SQ_IN_PER_ACRE = 6_272_640
 export const SQ_FT_PER_ACRE = 43_560
-const IN_PER_S_PER_MPH = new Decimal(63_360).div(3600) // 17.6 in/s per mph
+// 17.6 in/s for each mph.
+const IN_PER_S_PER_MPH = new Decimal(63_360).div(3600)
 // Rule of thumb, no published source: plate meters singulate less reliably above about 50 rpm.
 export const DEFAULT_PLATE_RPM_LIMIT = 50
 

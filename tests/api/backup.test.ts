@@ -26,8 +26,8 @@ async function counts(url: string) {
 describe('backup and restore', () => {
   it('writes a custom-format dump and restores it into a scratch database with the same rows', async () => {
     await createFarm()
-    const [{ url }] = await sql<{ url: string }>('select current_database() as url')
-    const source = localUrl(url)
+    const [row] = await sql<{ name: string }>('select current_database() as name')
+    const source = localUrl(row!.name)
     const dir = mkdtempSync(join(tmpdir(), 'rowbench-backup-'))
     const scratch = `rowbench_restore_${process.pid}`
     try {

@@ -1,0 +1,7 @@
+import { meterBody } from '#shared/schemas/calc'
+
+export default defineEventHandler(async (event) => {
+  await requireMember(event)
+  const body = await validBody(event, meterBody)
+  return computeMeter(body)
+})

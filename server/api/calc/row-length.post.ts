@@ -1,0 +1,7 @@
+import { rowLengthBody } from '#shared/schemas/calc'
+
+export default defineEventHandler(async (event) => {
+  await requireMember(event)
+  const body = await validBody(event, rowLengthBody)
+  return rowLengthForFraction(body)
+})

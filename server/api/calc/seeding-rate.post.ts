@@ -1,0 +1,7 @@
+import { seedingRateBody } from '#shared/schemas/calc'
+
+export default defineEventHandler(async (event) => {
+  await requireMember(event)
+  const body = await validBody(event, seedingRateBody)
+  return seedingRateForStand(body)
+})

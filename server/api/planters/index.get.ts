@@ -1,0 +1,6 @@
+import { listPlanters } from '../../services/equipment'
+
+export default defineEventHandler(async (event) => {
+  const member = await requireMember(event)
+  return listPlanters(member.farmId)
+})

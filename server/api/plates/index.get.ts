@@ -1,0 +1,6 @@
+import { listPlates } from '../../services/equipment'
+
+export default defineEventHandler(async (event) => {
+  const member = await requireMember(event)
+  return listPlates(member.farmId)
+})

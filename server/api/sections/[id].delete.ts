@@ -1,0 +1,8 @@
+import { idParams } from '#shared/schemas/common'
+import { deleteSection } from '../../services/equipment'
+
+export default defineEventHandler(async (event) => {
+  const member = await requireRole(event, ['owner', 'foreman'])
+  const { id } = validParams(event, idParams)
+  return deleteSection(member, id)
+})

@@ -1,0 +1,8 @@
+import { setupListQuery } from '#shared/schemas/setups'
+import { listSetups } from '../../services/setups'
+
+export default defineEventHandler(async (event) => {
+  const member = await requireMember(event)
+  const query = validQuery(event, setupListQuery)
+  return listSetups(member.farmId, query)
+})

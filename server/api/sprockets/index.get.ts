@@ -1,0 +1,6 @@
+import { listSprockets } from '../../services/equipment'
+
+export default defineEventHandler(async (event) => {
+  const member = await requireMember(event)
+  return listSprockets(member.farmId)
+})
