@@ -3,6 +3,7 @@ import { drizzle } from 'drizzle-orm/node-postgres'
 import pg from 'pg'
 import * as schema from '../../server/db/schema'
 import { seedAccounts } from './accounts'
+import { seedEquipment } from './equipment'
 
 export type SeedDb = ReturnType<typeof drizzle<typeof schema>>
 
@@ -14,7 +15,7 @@ export async function seedDemo(url: string) {
     if (existing.length) return false
     await db.transaction(async (tx) => {
       const accounts = await seedAccounts(tx as unknown as SeedDb)
-      void accounts
+      await seedEquipment(tx as unknown as SeedDb, accounts)
     })
     return true
   } finally {
