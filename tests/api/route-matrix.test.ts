@@ -40,7 +40,7 @@ describe('route matrix', () => {
     const rule: RouteRule = ROUTES[key]!
     const [method, pattern] = key.split(' ') as [string, string]
     const ids = rule.fixture ? await rule.fixture(a) : {}
-    const path = pattern.replace(/:(\w+)/g, (_, k: string) => String(ids[k] ?? 999_999_999))
+    const path = pattern.replace(/:(\w+)/g, (_, k: string) => String(ids[k] ?? 999_999_999)) + (ids.query ?? '')
     const body = rule.body?.(ids)
 
     if (rule.public) {
@@ -57,7 +57,7 @@ describe('route matrix', () => {
     }
     if (pattern.includes(':') && rule.fixture) {
       const foreign = await rule.fixture(b)
-      const foreignPath = pattern.replace(/:(\w+)/g, (_, k: string) => String(foreign[k]))
+      const foreignPath = pattern.replace(/:(\w+)/g, (_, k: string) => String(foreign[k])) + (foreign.query ?? '')
       const owner = clients[rule.roles[0]!]
       const res = await owner.request(method, foreignPath, rule.body?.(foreign))
       expect(res.status, `${key} on another farm's record`).toBe(404)
