@@ -7,6 +7,10 @@ const ALL: Role[] = ['owner', 'agronomist', 'operator', 'foreman']
 // What each role works with, in the order of the season.
 export const NAV_ITEMS: NavItem[] = [
   { to: '/', label: 'Today', roles: ALL, hint: 'Your farm at a glance' },
+  { to: '/bench', label: 'Setup bench', roles: ALL, hint: 'Plate and sprocket choices, live seed rate, the solver' },
+  { to: '/setups', label: 'Setups', roles: ALL, hint: 'Saved setups, their history and discussion' },
+  { to: '/planters', label: 'Equipment', roles: ALL, hint: 'Planters, row units and drive trains' },
+  { to: '/inventory', label: 'Plates & sprockets', roles: ['owner', 'foreman', 'operator'], hint: 'What is on the shelf' },
   { to: '/members', label: 'People', roles: ['owner'], hint: 'Invite members and set their roles' },
   { to: '/mailbox', label: 'Mailbox', roles: ['owner'], hint: 'Messages Rowbench sent (demo mailbox)' },
 ]
