@@ -119,3 +119,9 @@ export function roundTo(value: number, digits = 0): number {
 export function formatFeetInches(feet: number, inches: number): string {
   return `${feet} ft ${inches} in`
 }
+
+// Starting targets when a crop is picked, in seeds per acre: common practice, no source; the
+// agronomist's plan replaces them.
+export const STARTING_TARGETS: Record<string, number> = {
+  'corn': 34_000, 'soybeans': 140_000, 'sorghum': 90_000, 'cotton': 45_000, 'sunflower': 22_000, 'dry beans': 100_000, 'sugar beets': 55_000, 'peanuts': 110_000,
+}

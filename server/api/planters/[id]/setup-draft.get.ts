@@ -8,8 +8,12 @@ import { configFromPlanter } from '../../../services/setups'
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
   const { id } = validParams(event, idParams)
-  const q = validQuery(event, z.object({ crop: z.enum(CROPS).default('corn'), target: z.coerce.number().positive().max(2_000_000).default(34_000) }))
+  const q = validQuery(event, z.object({ crop: z.enum(CROPS).optional(), target: z.coerce.number().positive().max(2_000_000).optional() }))
   const planter = await getPlanter(member.farmId, id)
-  const config = configFromPlanter(planter, await listPlates(member.farmId), q.crop, q.target)
+  const plates = await listPlates(member.farmId)
+  // Without a crop, start from the crop of the plate on the planter.
+  const installed = plates.find((p) => p.id === planter.rowUnits.find((u) => u.seedPlateId)?.seedPlateId)
+  const crop = q.crop ?? (installed?.crops[0] as typeof CROPS[number] | undefined) ?? 'corn'
+  const config = configFromPlanter(planter, plates, crop, q.target ?? STARTING_TARGETS[crop] ?? 34_000)
   return { config, results: computeSetupResults(config) }
 })
