@@ -6,8 +6,9 @@ export const SQ_IN_PER_ACRE = 6_272_640
 export const SQ_FT_PER_ACRE = 43_560
 // 17.6 in/s for each mph.
 const IN_PER_S_PER_MPH = new Decimal(63_360).div(3600)
-// Rule of thumb, no published source: plate meters singulate less reliably above about 50 rpm.
-export const DEFAULT_PLATE_RPM_LIMIT = 50
+// Rule of thumb (common practice, no source): plate meters fill cells less reliably as the plate
+// speeds up; 35 rpm is a cautious default that the user can change.
+export const DEFAULT_PLATE_RPM_LIMIT = 35
 
 export interface DriveStageTeeth { driverTeeth: number, drivenTeeth: number }
 
@@ -94,15 +95,19 @@ export function seedsPerFootFromRate(input: { seedsPerAcre: number, rowSpacingIn
   return new Decimal(input.seedsPerAcre).div(SQ_FT_PER_ACRE).mul(new Decimal(input.rowSpacingIn).div(12)).toNumber()
 }
 
+// Seeds per acre = seeds per foot × 43,560 ÷ (row spacing in ÷ 12) (Iowa State University, Agron 212).
 export function seedsPerAcreFromFoot(input: { seedsPerFoot: number, rowSpacingIn: number }): number {
   return new Decimal(input.seedsPerFoot).mul(SQ_FT_PER_ACRE).div(new Decimal(input.rowSpacingIn).div(12)).toNumber()
 }
 
-// Slip implied by a count: 1 − counted ÷ expected-at-zero-slip, in percent.
-export function impliedSlipPercent(input: { expectedSeedsPerAcreNoSlip: number, countedSeedsPerAcre: number }): number {
-  return new Decimal(1).minus(new Decimal(input.countedSeedsPerAcre).div(input.expectedSeedsPerAcreNoSlip)).mul(100).toNumber()
+// Slip implied by a field count: (1 − counted ÷ expected at 0 % slip) × 100, from the meter formula.
+// A negative value means more seed than the drive predicts (doubles, or a wrong circumference).
+export function impliedSlipPercent(input: { expectedSeedsPerAcre: number, countedSeedsPerAcre: number }): number {
+  return new Decimal(1).minus(new Decimal(input.countedSeedsPerAcre).div(input.expectedSeedsPerAcre)).mul(100).toNumber()
 }
 
+// seeds/ha = seeds/acre × acres per hectare; cm = in × 2.54. convert-units 2 carries its own
+// factors (1 ha = 2.4710514 acres, 1 ppm from the exact 2.4710538), close enough for display.
 export function toMetricPopulation(input: { seedsPerAcre: number, seedSpacingIn: number }): { seedsPerHectare: number, seedSpacingCm: number } {
   const acresPerHectare = convert(1).from('ha').to('ac')
   return {

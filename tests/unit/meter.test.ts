@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
-import { computeMeter, driveRatio, impliedSlipPercent, rollingCircumferenceFromRun, rowLengthForFraction, seedingRateForStand, seedsPerAcreFromFoot, seedsPerFootFromRate, SQ_IN_PER_ACRE, toMetricPopulation } from '../../shared/utils/meter'
+import { computeMeter, DEFAULT_PLATE_RPM_LIMIT, driveRatio, impliedSlipPercent, rollingCircumferenceFromRun, rowLengthForFraction, seedingRateForStand, seedsPerAcreFromFoot, seedsPerFootFromRate, roundTo, SQ_IN_PER_ACRE, toMetricPopulation } from '../../shared/utils/meter'
 
 describe('row length for 1/1000 acre', () => {
   // University of Tennessee Extension, UT Crops News, "Checking corn populations" (2011);
@@ -44,7 +44,8 @@ describe('the meter formula', () => {
     expect(m.seedsPerFoot).toBeCloseTo(12 / m.seedSpacingIn, 10)
     expect(m.seedsPerSecond).toBeCloseTo((5 * 17.6) / m.seedSpacingIn, 10)
     expect(m.plateRpm).toBeCloseTo((m.seedsPerSecond! * 60) / 30, 10)
-    expect(m.plateRpmWarning).toBeUndefined()
+    // 42.8 rpm is above the 35 rpm default (a rule of thumb, no source).
+    expect(m.plateRpmWarning).toMatch(/42\.8 rpm/)
   })
 
   it('warns when the plate turns faster than the limit (a rule of thumb, no source)', () => {
@@ -64,13 +65,26 @@ describe('the meter formula', () => {
     const base = { wheelCircumferenceIn: 86.4, stages: [{ driverTeeth: 20, drivenTeeth: 20 }], meterRatio: 1, cellsPerPlate: 30, rowSpacingIn: 30 }
     const noSlip = computeMeter({ ...base, slipPercent: 0 }).seedsPerAcre
     const withSlip = computeMeter({ ...base, slipPercent: 4.5 }).seedsPerAcre
-    expect(impliedSlipPercent({ expectedSeedsPerAcreNoSlip: noSlip, countedSeedsPerAcre: withSlip })).toBeCloseTo(4.5, 9)
+    expect(impliedSlipPercent({ expectedSeedsPerAcre: noSlip, countedSeedsPerAcre: withSlip })).toBeCloseTo(4.5, 9)
   })
 
-  it('converts to metric: 1 ha = 2.4711 acres, 1 in = 2.54 cm', () => {
+  it('converts to metric within 10 ppm of the exact definitions (1 in = 2.54 cm, 1 acre = 43,560 ft² = 0.40468564224 ha by the 1959 international foot; computed)', () => {
     const m = toMetricPopulation({ seedsPerAcre: 34_000, seedSpacingIn: 6 })
-    expect(m.seedsPerHectare).toBeCloseTo(84_015.7, 0)
-    expect(m.seedSpacingCm).toBeCloseTo(15.24, 3)
+    expect(Math.abs(m.seedsPerHectare / (34_000 / 0.40468564224) - 1)).toBeLessThan(1e-5)
+    expect(Math.abs(m.seedSpacingCm / 15.24 - 1)).toBeLessThan(1e-5)
+  })
+
+  it('warns above the default plate speed of 35 rpm (a rule of thumb, no source)', () => {
+    const base = { wheelCircumferenceIn: 60, slipPercent: 0, stages: [{ driverTeeth: 20, drivenTeeth: 20 }], meterRatio: 1, cellsPerPlate: 10, rowSpacingIn: 30 }
+    // 6 in spacing: at 2 mph 5.87 seeds/s → 35.2 rpm; at 1.9 mph 33.4 rpm (computed).
+    expect(DEFAULT_PLATE_RPM_LIMIT).toBe(35)
+    expect(computeMeter({ ...base, speedMph: 2 }).plateRpmWarning).toMatch(/35 rpm/)
+    expect(computeMeter({ ...base, speedMph: 1.9 }).plateRpmWarning).toBeUndefined()
+  })
+
+  it('rounds for display only, half away from zero', () => {
+    expect(roundTo(34_848.5)).toBe(34_849)
+    expect(roundTo(5.7392, 2)).toBe(5.74)
   })
 })
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import { computeMeter } from '../../shared/utils/meter'
-import { rateChart, solveDrive, type SolverInput, type SolverStage } from '../../shared/utils/solver'
+import { rateChart, SOLVER_MAX_WORK, solveDrive, solverWork, type SolverInput, type SolverStage } from '../../shared/utils/solver'
 
 // Every combination, tried one by one: the reference the solver must match.
 function bruteForceBestError(input: SolverInput): number {
@@ -80,6 +80,35 @@ describe('sprocket and plate solver', () => {
         expect(Math.abs(best!.errorPercent)).toBeLessThanOrEqual(bruteForceBestError(input) + 1e-9)
       },
     ), { numRuns: 60 })
+  })
+})
+
+describe('solver inventory and limits', () => {
+  it('leaves out plates with none on hand, except the installed one', () => {
+    const plates = [{ id: 1, code: 'CF-30', cellsPerPlate: 30, quantityOnHand: 0 }, { id: 2, code: 'CF-24', cellsPerPlate: 24, quantityOnHand: 0 }]
+    const out = solveDrive({ ...base, plates, targetSeedsPerAcre: 20_000, limit: 50 })
+    expect(out.length).toBeGreaterThan(0)
+    expect(out.every((c) => c.plateId === 1)).toBe(true)
+  })
+
+  it('names every swap from the installed part to the new one', () => {
+    const [best] = solveDrive({ ...base, targetSeedsPerAcre: 20_000 })
+    for (const s of best!.swaps) expect(s.from).not.toBe(s.to)
+    expect(best!.swaps.length).toBe(best!.partsToChange)
+  })
+
+  it('refuses a drive too large to search, with the size in the message', () => {
+    const teeth = Array.from({ length: 15 }, (_, i) => 11 + i * 3)
+    const stages = Array.from({ length: 6 }, (_, i) => ({ position: i + 1, driverTeeth: 20, drivenTeeth: 20, driverOptions: teeth, drivenOptions: teeth }))
+    expect(solverWork({ stages, plates: base.plates }).work).toBeGreaterThan(SOLVER_MAX_WORK)
+    expect(() => solveDrive({ ...base, stages, targetSeedsPerAcre: 34_000 })).toThrow(/too many sprocket combinations/)
+  })
+
+  it('splits three full stages after the first, the cheapest place', () => {
+    const teeth = Array.from({ length: 15 }, (_, i) => 12 + i * 2)
+    const stages = [1, 2, 3].map((position) => ({ position, driverTeeth: 20, drivenTeeth: 20, driverOptions: teeth, drivenOptions: teeth }))
+    // 225 pairs a stage: 225 × 30 plates + 225² = 57,375 steps (computed).
+    expect(solverWork({ stages, plates: Array.from({ length: 30 }, (_, i) => ({ id: i, code: `P${i}`, cellsPerPlate: 20 })) })).toEqual({ work: 57_375, split: 1 })
   })
 })
 
