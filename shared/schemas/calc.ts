@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { plantingDayOfYear } from '../utils/replant'
 
 // Limits shared by calculators, the equipment forms and the server.
 export const teeth = (label: string) => z.number({ error: `${label} must be a number` }).int(`${label} must be a whole number from 1 to 200`).min(1, `${label} must be a whole number from 1 to 200`).max(200, `${label} must be a whole number from 1 to 200`)
@@ -35,3 +36,104 @@ export const seedingRateBody = z.strictObject({
 })
 
 export type MeterBody = z.infer<typeof meterBody>
+
+// A finite number in a range, with one message for every way it can fail.
+const between = (label: string, min: number, max: number, unit = '') => {
+  const msg = `${label} must be a number from ${min} to ${max}${unit}`
+  return z.number({ error: msg }).min(min, msg).max(max, msg)
+}
+const wholeBetween = (label: string, min: number, max: number) => {
+  const msg = `${label} must be a whole number from ${min} to ${max}`
+  return z.number({ error: msg }).int(msg).min(min, msg).max(max, msg)
+}
+const percentAbove0 = (label: string) => positive(label, 100)
+const lengthFt = positive('Length', 10_000)
+
+export const granularBody = z.strictObject({
+  rowSpacingIn,
+  ozPer1000Ft: positive('Ounces per 1,000 ft', 10_000).optional(),
+  lbPerAcre: positive('Rate', 10_000).optional(),
+  bandRateLbPerAcre: positive('Band rate', 10_000).optional(),
+  bandWidthIn: positive('Band width', 120).optional(),
+}).superRefine((b, ctx) => {
+  const given = [b.ozPer1000Ft, b.lbPerAcre, b.bandRateLbPerAcre].filter((v) => v !== undefined).length
+  if (given !== 1) ctx.addIssue({ code: 'custom', path: ['lbPerAcre'], message: 'Give exactly one of ounces per 1,000 ft, rate per acre or band rate' })
+  if (b.bandRateLbPerAcre !== undefined && b.bandWidthIn === undefined) ctx.addIssue({ code: 'custom', path: ['bandWidthIn'], message: 'A band rate needs the band width' })
+  if (b.bandWidthIn !== undefined && b.bandWidthIn > b.rowSpacingIn) ctx.addIssue({ code: 'custom', path: ['bandWidthIn'], message: 'The band cannot be wider than the row spacing' })
+})
+
+export const catchPoint = z.strictObject({
+  setting: between('Setting', -1000, 1000),
+  weightOz: positive('Catch weight', 100_000),
+})
+
+export const catchTestBody = z.strictObject({
+  points: z.array(catchPoint, { error: 'Points must be a list' }).min(2, 'Give at least two catches').max(100, 'Give at most 100 catches'),
+  courseFt: lengthFt,
+  rowSpacingIn,
+  targetLbPerAcre: positive('Target rate', 10_000),
+  currentSetting: between('Current setting', -1000, 1000).optional(),
+}).refine((b) => new Set(b.points.map((p) => p.setting)).size >= 2, { path: ['points'], message: 'Catch at two or more different settings' })
+
+export const liquidBody = z.strictObject({
+  gpm: positive('Flow', 1000),
+  mph: speedMph,
+  widthIn: positive('Spacing', 1200),
+  specificGravity: positive('Specific gravity', 3).optional(),
+})
+
+export const capacityBody = z.strictObject({
+  rows: wholeBetween('Rows', 1, 96),
+  rowSpacingIn,
+  speedMph,
+  efficiencyPercent: percentAbove0('Field efficiency'),
+})
+
+export const spacingQualityBody = z.strictObject({
+  spacingsIn: z.array(positive('Each spacing', 1000), { error: 'Spacings must be a list' }).min(1, 'Give at least one spacing').max(100_000, 'Give at most 100,000 spacings'),
+  theoreticalIn: positive('Theoretical spacing', 1000),
+})
+
+export const seedCheckBody = z.strictObject({
+  seedsCounted: wholeBetween('Seeds counted', 0, 100_000),
+  lengthFt,
+  rowSpacingIn,
+})
+
+export const standCountBody = z.strictObject({
+  counts: z.array(wholeBetween('Each count', 0, 100_000), { error: 'Counts must be a list' }).min(1, 'Give at least one count').max(1000, 'Give at most 1,000 counts'),
+  lengthFt,
+  rowSpacingIn,
+})
+
+const isDate = (s: string) => {
+  try {
+    plantingDayOfYear(s)
+    return true
+  }
+  catch {
+    return false
+  }
+}
+const isoDate = z.string({ error: 'Give a date as YYYY-MM-DD' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Give a date as YYYY-MM-DD').refine(isDate, 'Give a date that exists, as YYYY-MM-DD')
+
+export const replantBody = z.strictObject({
+  currentStand: between('Current stand', 0, 100_000),
+  currentPlantingDate: isoDate,
+  replantStand: between('Replant stand', 0, 100_000),
+  replantDate: isoDate,
+  expectedYieldBuPerAcre: positive('Expected yield', 500),
+  pricePerBu: positive('Price', 100),
+  replantCostPerAcre: between('Replant cost', 0, 10_000),
+})
+
+export type RowLengthBody = z.infer<typeof rowLengthBody>
+export type SeedingRateBody = z.infer<typeof seedingRateBody>
+export type GranularBody = z.infer<typeof granularBody>
+export type CatchTestBody = z.infer<typeof catchTestBody>
+export type LiquidBody = z.infer<typeof liquidBody>
+export type CapacityBody = z.infer<typeof capacityBody>
+export type SpacingQualityBody = z.infer<typeof spacingQualityBody>
+export type SeedCheckBody = z.infer<typeof seedCheckBody>
+export type StandCountBody = z.infer<typeof standCountBody>
+export type ReplantBody = z.infer<typeof replantBody>
