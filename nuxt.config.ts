@@ -21,6 +21,9 @@ const securityHeaders = {
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
   srcDir: '.',
+  // Keep build intermediates inside the checkout (not node_modules/.cache), so checkouts that share
+  // node_modules do not build over each other.
+  buildDir: '.nuxt',
   dir: { app: '.' },
   telemetry: false,
   devtools: { enabled: false },

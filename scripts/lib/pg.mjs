@@ -123,3 +123,11 @@ export function ensureDatabase(name, { fresh = false } = {}) {
 }
 
 export { findBinDir, PG_USER, PG_PASSWORD }
+
+// Restarts the cluster (fault tests): connections drop, the server comes back on the same port.
+export function dbRestart() {
+  const bin = findBinDir()
+  const p = paths()
+  const r = asPostgres(`${bin}/pg_ctl`, ['-D', p.data, '-l', p.log, '-m', 'fast', '-w', '-t', '60', 'restart'])
+  if (r.status !== 0) throw new Error(`restart failed: ${r.stderr}`)
+}

@@ -38,11 +38,11 @@ export function freePort(preferred) {
   })
 }
 
-export async function startTestServer({ database, port: wantPort, smtpPort: wantSmtp, seed = false, env: extra = {} }) {
+export async function startTestServer({ database, port: wantPort, smtpPort: wantSmtp, seed = false, fresh = true, smtp = true, env: extra = {} }) {
   const port = await freePort(wantPort)
   const smtpPort = await freePort(wantSmtp)
   dbUp()
-  ensureDatabase(database, { fresh: true })
+  ensureDatabase(database, { fresh })
   const databaseUrl = localUrl(database)
   await runMigrations(databaseUrl)
   if (seed) {
@@ -51,7 +51,7 @@ export async function startTestServer({ database, port: wantPort, smtpPort: want
     await seedDemo(databaseUrl)
   }
   const mailbox = mkdtempSync(join(tmpdir(), 'rowbench-mail-'))
-  const smtp = await startFakeSmtp({ port: smtpPort, dir: mailbox })
+  const smtpServer = smtp ? await startFakeSmtp({ port: smtpPort, dir: mailbox }) : null
   const uploads = mkdtempSync(join(tmpdir(), 'rowbench-uploads-'))
   const baseUrl = `http://127.0.0.1:${port}`
   const child = spawn(process.execPath, [resolve(root, '.output/server/index.mjs')], {
@@ -80,7 +80,8 @@ export async function startTestServer({ database, port: wantPort, smtpPort: want
     baseUrl, databaseUrl, mailbox, uploads, smtpPort, child,
     async stop() {
       child.kill('SIGTERM')
-      await new Promise((r) => smtp.close(r))
+      await new Promise((r) => (smtpServer ? smtpServer.close(r) : r()))
+      await new Promise((r) => (child.exitCode !== null ? r() : child.once('exit', r)))
     },
   }
 }

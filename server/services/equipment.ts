@@ -312,6 +312,10 @@ export async function solvePlanter(member: Member, planterId: number, body: z.in
   const plates = (await listPlates(member.farmId))
     .filter((pl) => (pl.quantityOnHand > 0 || pl.id === installedPlateId) && (!body.crop || pl.crops.includes(body.crop)))
   if (!plates.length) throw createError({ statusCode: 409, message: body.crop ? `No ${body.crop} plates on hand` : 'No seed plates on hand' })
+  const stages = section.stages.map((s) => ({ position: s.position, driverTeeth: s.driverTeeth, drivenTeeth: s.drivenTeeth, driverOptions: s.driverOptions, drivenOptions: s.drivenOptions }))
+  if (solverWork({ stages, plates }).work > SOLVER_MAX_WORK) {
+    badRequest('This drive has too many sprocket sizes on hand to search every combination; list fewer sizes per position.', { stages: 'Too many combinations to search' })
+  }
   const choices = solveDrive({
     targetSeedsPerAcre: body.targetSeedsPerAcre,
     targetSpacingIn: body.targetSpacingIn,
@@ -319,7 +323,7 @@ export async function solvePlanter(member: Member, planterId: number, body: z.in
     wheelCircumferenceIn: p.wheelCircumferenceIn,
     slipPercent: p.slipPercent,
     meterRatio: p.meterRatio,
-    stages: section.stages.map((s) => ({ position: s.position, driverTeeth: s.driverTeeth, drivenTeeth: s.drivenTeeth, driverOptions: s.driverOptions, drivenOptions: s.drivenOptions })),
+    stages,
     plates: plates.map((pl) => ({ id: pl.id, code: pl.code, cellsPerPlate: pl.cellsPerPlate })),
     installedPlateId,
     limit: body.limit,

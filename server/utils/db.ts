@@ -19,6 +19,9 @@ export function useDb(): Db {
       idleTimeoutMillis: 30_000,
     })
     pool.on('error', (err) => console.warn('[db] idle client error:', err.message))
+    // A client in use when the server goes away emits its own error; the query that used it fails
+    // and answers 503, and the pool replaces the client.
+    pool.on('connect', (client) => client.on('error', (err) => console.warn('[db] client error:', err.message)))
     db = drizzle(pool, { schema, casing: 'snake_case' })
   }
   return db

@@ -11,7 +11,7 @@ export interface Member {
 
 // The member's role is cached for a few seconds per instance; a role change or removal clears the
 // entry here at once, and other instances see it within the TTL.
-const ROLE_TTL_MS = 5_000
+const ROLE_TTL_MS = Number(process.env.ROWBENCH_ROLE_TTL_MS || 5_000)
 const roleCache = new Map<string, { role: Role | null, farmName: string, at: number }>()
 
 export function forgetMembership(userId: number, farmId: number) {

@@ -12,7 +12,11 @@ export const TEST_PASSWORD = 'test-password-123'
 
 let pool: pg.Pool | undefined
 export function db() {
-  pool ??= new pg.Pool({ connectionString: inject('databaseUrl'), max: 3 })
+  if (!pool) {
+    pool = new pg.Pool({ connectionString: inject('databaseUrl'), max: 3 })
+    // Fault tests restart PostgreSQL; idle clients then error and are replaced.
+    pool.on('error', () => {})
+  }
   return pool
 }
 
@@ -60,16 +64,16 @@ export interface TestFarm {
 
 let passwordHash: string | undefined
 
-// A new farm with one member per role, made straight in the database.
-export async function createFarm(): Promise<TestFarm> {
+// A new farm with one member per role, made straight in the database (another one when given).
+export async function createFarm(query: typeof sql = sql, client: () => Client = () => new Client()): Promise<TestFarm> {
   passwordHash ??= await hasher.make(TEST_PASSWORD)
   const name = unique('Farm')
-  const [farm] = await sql<{ id: number }>('insert into farms (name) values ($1) returning id', [name])
+  const [farm] = await query<{ id: number }>('insert into farms (name) values ($1) returning id', [name])
   const users = {} as TestFarm['users']
   for (const role of ['owner', 'agronomist', 'operator', 'foreman'] as Role[]) {
     const email = `${unique(role)}@test.example`.toLowerCase()
-    const [u] = await sql<{ id: number }>('insert into users (email, name, password_hash) values ($1, $2, $3) returning id', [email, `${role} of ${name}`, passwordHash])
-    await sql('insert into memberships (farm_id, user_id, role) values ($1, $2, $3)', [farm!.id, u!.id, role])
+    const [u] = await query<{ id: number }>('insert into users (email, name, password_hash) values ($1, $2, $3) returning id', [email, `${role} of ${name}`, passwordHash])
+    await query('insert into memberships (farm_id, user_id, role) values ($1, $2, $3)', [farm!.id, u!.id, role])
     users[role] = { id: u!.id, email }
   }
   return {
@@ -77,7 +81,7 @@ export async function createFarm(): Promise<TestFarm> {
     farmName: name,
     users,
     async as(role: Role) {
-      const c = new Client()
+      const c = client()
       const r = await c.post('/api/auth/login', { email: users[role].email, password: TEST_PASSWORD })
       if (r.status !== 200) throw new Error(`sign-in as ${role} failed: ${r.status} ${JSON.stringify(r.data)}`)
       return c
