@@ -11,6 +11,8 @@ export default defineConfig({
           name: 'unit',
           include: ['tests/unit/**/*.test.ts'],
           environment: 'node',
+          // Property tests run hundreds of cases; a loaded 2-core machine needs the room.
+          testTimeout: 60_000,
         },
       },
       await defineVitestProject({
@@ -18,6 +20,8 @@ export default defineConfig({
           name: 'nuxt',
           include: ['tests/nuxt/**/*.test.ts'],
           environment: 'nuxt',
+          hookTimeout: 120_000,
+          testTimeout: 30_000,
         },
       }),
       {
