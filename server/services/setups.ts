@@ -44,6 +44,7 @@ async function normaliseConfig(tx: Tx, farmId: number, planter: PlanterDetail, c
   const byId = new Map(plates.map((p) => [p.id, p]))
   config.sections.forEach((s, i) => {
     if (s.seedPlateId && !byId.has(s.seedPlateId)) fields[`config.sections.${i}.seedPlateId`] = 'Unknown seed plate'
+    if (s.sectionId && !planter.sections.some((ps) => ps.id === s.sectionId)) fields[`config.sections.${i}.sectionId`] = 'This is not a drive section of this planter'
     const bad = s.rows.filter((r) => r > planter.rowCount)
     if (bad.length) fields[`config.sections.${i}.rows`] = `Rows ${bad.join(', ')} do not exist on this planter`
   })
