@@ -42,6 +42,14 @@ describe('equipment edits that change nothing or too much', () => {
     expect(await configVersion(planter.id)).toBe(version)
   })
 
+  it('changes one stage field without emptying the sizes on hand', async () => {
+    const { foreman, planter } = await setup()
+    const stage = planter.sections[0]!.stages[0]!
+    const res = await foreman.patch(`/api/stages/${stage.id}`, { driverTeeth: 22 })
+    expect(res.status).toBe(200)
+    expect(res.data.sections[0].stages[0]).toMatchObject({ driverTeeth: 22, drivenTeeth: 24, driverOptions: [16, 18, 20, 22], drivenOptions: [20, 24, 28] })
+  })
+
   it('refuses a seed-size range whose upper end is below the lower end', async () => {
     const { foreman, plate } = await setup()
     const created = await foreman.post('/api/plates', { code: 'E-BAD', crops: ['corn'], cellsPerPlate: 24, seedsPerLbMin: 1800, seedsPerLbMax: 1200 })
@@ -93,6 +101,9 @@ describe('inventory over HTTP', () => {
     const { farm, foreman, plate, sprocket } = await setup()
     const p = await foreman.patch(`/api/plates/${plate.id}`, { quantityOnHand: 5, wearNotes: 'one chipped cell' })
     expect(p.data).toMatchObject({ quantityOnHand: 5, wearNotes: 'one chipped cell' })
+    // A change to one field leaves the count alone.
+    expect((await foreman.patch(`/api/plates/${plate.id}`, { wearNotes: 'two chipped cells' })).data.quantityOnHand).toBe(5)
+    expect((await foreman.patch(`/api/sprockets/${sprocket.id}`, { chainPitch: '#50' })).data).toMatchObject({ chainPitch: '#50', quantityOnHand: 3 })
     const s = await foreman.patch(`/api/sprockets/${sprocket.id}`, { quantityOnHand: 0 })
     expect(s.data.quantityOnHand).toBe(0)
     for (const role of ['operator', 'agronomist'] as const) {
