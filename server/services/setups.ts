@@ -19,7 +19,8 @@ export function configFromPlanter(p: PlanterDetail, plates: { id: number, code: 
     wheelCircumferenceIn: p.wheelCircumferenceIn,
     slipPercent: p.slipPercent,
     meterRatio: p.meterRatio,
-    sections: p.sections.map((s) => {
+    // A section whose rows all moved to another one drives nothing and has no place in a setup.
+    sections: p.sections.filter((s) => s.rows.length > 0).map((s) => {
       const plateId = p.rowUnits.find((u) => s.rows.includes(u.position) && u.seedPlateId)?.seedPlateId ?? null
       const plate = plateOf(plateId)
       return {

@@ -82,6 +82,16 @@ describe('equipment edits that change nothing or too much', () => {
     expect((await foreman.get('/api/health')).status).toBe(200)
   })
 
+  it('starts a setup from a planter whose first section gave all its rows to a new one', async () => {
+    const { farm, foreman, planter } = await setup()
+    const moved = await foreman.post(`/api/planters/${planter.id}/sections`, { name: 'Whole bar', rows: [1, 2, 3, 4, 5, 6, 7, 8] })
+    expect(moved.data.sections.map((s: { rows: number[] }) => s.rows.length)).toEqual([0, 8])
+    const draft = (await foreman.get(`/api/planters/${planter.id}/setup-draft?crop=corn&target=32000`)).data
+    expect(draft.config.sections.map((s: { name: string }) => s.name)).toEqual(['Whole bar'])
+    const saved = await (await farm.as('operator')).post('/api/setups', { planterId: planter.id, name: 'Whole bar setup', config: draft.config })
+    expect(saved.status).toBe(201)
+  })
+
   it('refuses a setup that names a drive section of another planter', async () => {
     const { farm, foreman, planter } = await setup()
     const other = (await foreman.post('/api/planters', { ...planterBody, name: 'Edge other' })).data as Planter
