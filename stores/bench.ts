@@ -1,5 +1,6 @@
 import { defineStore } from 'pinia'
 import type { SetupConfig } from '#shared/types/setup'
+import { setupConfig } from '#shared/schemas/setups'
 
 // The setup being worked on at the bench; it survives moving to the rate chart and back.
 export const useBenchStore = defineStore('bench', () => {
@@ -18,6 +19,13 @@ export const useBenchStore = defineStore('bench', () => {
     name.value = input.name ?? ''
   }
 
+  // What the server would refuse, shown as the user types instead of after a failed save.
+  const problems = computed(() => {
+    if (!config.value) return []
+    const check = setupConfig.safeParse(config.value)
+    return check.success ? [] : [...new Set(check.error.issues.map((i) => i.message))]
+  })
+
   const results = computed(() => {
     if (!config.value) return null
     try {
@@ -27,5 +35,5 @@ export const useBenchStore = defineStore('bench', () => {
     }
   })
 
-  return { planterId, setupId, baseRevision, name, config, metric, start, results }
+  return { planterId, setupId, baseRevision, name, config, metric, start, results, problems }
 })

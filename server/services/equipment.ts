@@ -36,6 +36,11 @@ function circumference(body: { wheelCircumferenceIn?: number, circumferenceRun?:
   return body.wheelCircumferenceIn !== undefined ? { wheelCircumferenceIn: body.wheelCircumferenceIn, circumferenceRevolutions: null, circumferenceDistanceFt: null } : {}
 }
 
+// An edit that sets no field would only bump versions and write empty audit entries.
+function requireChanges(patch: Record<string, unknown>, field = '_') {
+  if (!Object.values(patch).some((v) => v !== undefined)) badRequest('There is nothing to change', { [field]: 'Change at least one field' })
+}
+
 async function bumpConfig(tx: Tx, planterId: number) {
   await tx.update(planters).set({ configVersion: sql`${planters.configVersion} + 1` }).where(eq(planters.id, planterId))
 }
@@ -58,6 +63,7 @@ export async function updatePlanter(member: Member, id: number, patch: z.infer<t
   return useDb().transaction(async (tx) => {
     const [before] = await tx.select().from(planters).where(and(eq(planters.id, id), eq(planters.farmId, member.farmId))).for('update')
     if (!before) notFound('Planter')
+    requireChanges({ ...patch, configVersion: undefined })
     if (patch.configVersion !== undefined && patch.configVersion !== before.configVersion) {
       throw createError({ statusCode: 409, message: 'Someone else changed this planter since you opened it. Reload to see their changes.' })
     }
@@ -129,6 +135,7 @@ export async function addSection(member: Member, planterId: number, body: z.infe
 export async function updateSection(member: Member, sectionId: number, patch: z.infer<typeof sectionPatch>) {
   return useDb().transaction(async (tx) => {
     const before = await sectionOfFarm(tx, member.farmId, sectionId)
+    requireChanges(patch)
     const p = await getPlanter(member.farmId, before.planterId, tx)
     if (patch.rows) {
       checkRows(patch.rows, p.rowCount)
@@ -180,6 +187,7 @@ export async function addStage(member: Member, sectionId: number, body: z.infer<
 export async function updateStage(member: Member, stageId: number, patch: z.infer<typeof stagePatch>) {
   return useDb().transaction(async (tx) => {
     const { stage: before, planterId } = await stageOfFarm(tx, member.farmId, stageId)
+    requireChanges(patch)
     const [after] = await tx.update(driveStages).set(patch).where(eq(driveStages.id, stageId)).returning()
     await bumpConfig(tx, planterId)
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'update', entity: 'drive_stage', entityId: stageId, before, after })
@@ -212,6 +220,7 @@ export async function updateRowUnit(member: Member, unitId: number, patch: z.inf
     const [row] = await tx.select({ unit: rowUnits }).from(rowUnits).innerJoin(planters, eq(planters.id, rowUnits.planterId))
       .where(and(eq(rowUnits.id, unitId), eq(planters.farmId, member.farmId))).for('update')
     if (!row) notFound('Row unit')
+    requireChanges(patch)
     await checkPlate(tx, member.farmId, patch.seedPlateId)
     const [after] = await tx.update(rowUnits).set(patch).where(eq(rowUnits.id, unitId)).returning()
     await bumpConfig(tx, row.unit.planterId)
@@ -223,6 +232,7 @@ export async function updateRowUnit(member: Member, unitId: number, patch: z.inf
 export async function updateRowUnits(member: Member, planterId: number, body: z.infer<typeof bulkRowUnitBody>) {
   return useDb().transaction(async (tx) => {
     const p = await getPlanter(member.farmId, planterId, tx)
+    requireChanges(body.changes, 'changes')
     checkRows(body.positions, p.rowCount)
     await checkPlate(tx, member.farmId, body.changes.seedPlateId)
     const after = await tx.update(rowUnits).set(body.changes).where(and(eq(rowUnits.planterId, planterId), inArray(rowUnits.position, body.positions))).returning()
@@ -237,7 +247,14 @@ export async function listPlates(farmId: number) {
   return useDb().select().from(seedPlates).where(eq(seedPlates.farmId, farmId)).orderBy(asc(seedPlates.code))
 }
 
+function checkSeedRange(p: { seedsPerLbMin?: number | null, seedsPerLbMax?: number | null }) {
+  if (p.seedsPerLbMin != null && p.seedsPerLbMax != null && p.seedsPerLbMax < p.seedsPerLbMin) {
+    badRequest('The seed-size range is upside down', { seedsPerLbMax: 'The upper end must not be below the lower end' })
+  }
+}
+
 export async function createPlate(member: Member, body: z.infer<typeof plateBody>) {
+  checkSeedRange(body)
   return useDb().transaction(async (tx) => {
     const [p] = await tx.insert(seedPlates).values({ ...body, farmId: member.farmId }).returning()
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'create', entity: 'seed_plate', entityId: p!.id, after: p })
@@ -249,6 +266,8 @@ export async function updatePlate(member: Member, id: number, patch: z.infer<typ
   return useDb().transaction(async (tx) => {
     const [before] = await tx.select().from(seedPlates).where(and(eq(seedPlates.id, id), eq(seedPlates.farmId, member.farmId))).for('update')
     if (!before) notFound('Seed plate')
+    requireChanges(patch)
+    checkSeedRange({ seedsPerLbMin: patch.seedsPerLbMin !== undefined ? patch.seedsPerLbMin : before.seedsPerLbMin, seedsPerLbMax: patch.seedsPerLbMax !== undefined ? patch.seedsPerLbMax : before.seedsPerLbMax })
     const [after] = await tx.update(seedPlates).set(patch).where(eq(seedPlates.id, id)).returning()
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'update', entity: 'seed_plate', entityId: id, before, after })
     return after!
@@ -280,6 +299,7 @@ export async function updateSprocket(member: Member, id: number, patch: z.infer<
   return useDb().transaction(async (tx) => {
     const [before] = await tx.select().from(sprockets).where(and(eq(sprockets.id, id), eq(sprockets.farmId, member.farmId))).for('update')
     if (!before) notFound('Sprocket')
+    requireChanges(patch)
     const [after] = await tx.update(sprockets).set(patch).where(eq(sprockets.id, id)).returning()
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'update', entity: 'sprocket', entityId: id, before, after })
     return after!
@@ -301,6 +321,20 @@ function pickSection(p: PlanterDetail, sectionId?: number) {
   return section
 }
 
+// Raw driver × driven pairings the search walks; past this a planter's sizes lists are a typing slip
+// or a denial of service, not a drive train (the 3 stage × 15 size case is about 16.8 million).
+const MAX_SEARCHED_PAIRINGS = 20_000_000
+
+function pairings(stages: PlanterDetail['sections'][number]['stages']) {
+  return stages.reduce((n, s) => n * new Set([s.driverTeeth, ...s.driverOptions]).size * new Set([s.drivenTeeth, ...s.drivenOptions]).size, 1)
+}
+
+function assertSearchable(stageGroups: PlanterDetail['sections'][number]['stages'][]) {
+  if (stageGroups.some((g) => pairings(g) > MAX_SEARCHED_PAIRINGS)) {
+    badRequest('This drive train has too many sprocket combinations to search. Trim the sizes on hand of its stages to the ones on the shelf.', { stages: 'Too many sprocket combinations' })
+  }
+}
+
 function installedPlateOf(p: PlanterDetail, rows: number[]) {
   return p.rowUnits.find((u) => rows.includes(u.position) && u.planting)?.seedPlateId ?? null
 }
@@ -308,6 +342,9 @@ function installedPlateOf(p: PlanterDetail, rows: number[]) {
 export async function solvePlanter(member: Member, planterId: number, body: z.infer<typeof solveBody>) {
   const p = await getPlanter(member.farmId, planterId)
   const section = pickSection(p, body.sectionId)
+  // The solver searches the two halves of the stage list separately.
+  const half = Math.floor(section.stages.length / 2)
+  assertSearchable([section.stages.slice(0, half), section.stages.slice(half)])
   const installedPlateId = installedPlateOf(p, section.rows)
   const plates = (await listPlates(member.farmId))
     .filter((pl) => (pl.quantityOnHand > 0 || pl.id === installedPlateId) && (!body.crop || pl.crops.includes(body.crop)))
@@ -334,6 +371,7 @@ export async function solvePlanter(member: Member, planterId: number, body: z.in
 export async function planterRateChart(member: Member, planterId: number, query: { plateId?: number, cells?: number, sectionId?: number, rowSpacings: number[] }) {
   const p = await getPlanter(member.farmId, planterId)
   const section = pickSection(p, query.sectionId)
+  assertSearchable([section.stages])
   let cells = query.cells
   let plateCode: string | null = null
   const plateId = query.plateId ?? (cells ? null : installedPlateOf(p, section.rows))

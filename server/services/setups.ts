@@ -19,7 +19,8 @@ export function configFromPlanter(p: PlanterDetail, plates: { id: number, code: 
     wheelCircumferenceIn: p.wheelCircumferenceIn,
     slipPercent: p.slipPercent,
     meterRatio: p.meterRatio,
-    sections: p.sections.map((s) => {
+    // A section whose rows all moved to another one drives nothing and has no place in a setup.
+    sections: p.sections.filter((s) => s.rows.length > 0).map((s) => {
       const plateId = p.rowUnits.find((u) => s.rows.includes(u.position) && u.seedPlateId)?.seedPlateId ?? null
       const plate = plateOf(plateId)
       return {
@@ -44,6 +45,7 @@ async function normaliseConfig(tx: Tx, farmId: number, planter: PlanterDetail, c
   const byId = new Map(plates.map((p) => [p.id, p]))
   config.sections.forEach((s, i) => {
     if (s.seedPlateId && !byId.has(s.seedPlateId)) fields[`config.sections.${i}.seedPlateId`] = 'Unknown seed plate'
+    if (s.sectionId && !planter.sections.some((ps) => ps.id === s.sectionId)) fields[`config.sections.${i}.sectionId`] = 'This is not a drive section of this planter'
     const bad = s.rows.filter((r) => r > planter.rowCount)
     if (bad.length) fields[`config.sections.${i}.rows`] = `Rows ${bad.join(', ')} do not exist on this planter`
   })

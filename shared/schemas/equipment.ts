@@ -21,7 +21,14 @@ export const stageBody = z.strictObject({
   driverOptions: teethList('Driver sizes on hand').default([]),
   drivenOptions: teethList('Driven sizes on hand').default([]),
 })
-export const stagePatch = stageBody.partial()
+// Spelled out: a partial of stageBody would keep its defaults and empty the sizes lists on every edit.
+export const stagePatch = z.strictObject({
+  chainPitch: shortText(20).optional(),
+  driverTeeth: teeth('Driver teeth'),
+  drivenTeeth: teeth('Driven teeth'),
+  driverOptions: teethList('Driver sizes on hand'),
+  drivenOptions: teethList('Driven sizes on hand'),
+}).partial()
 
 export const circumferenceRun = z.strictObject({
   revolutions: positive('Revolutions', 1000),
@@ -82,6 +89,9 @@ export const bulkRowUnitBody = z.strictObject({
   changes: rowUnitPatch,
 })
 
+// Patches use it without the default, which zod would otherwise apply and reset the count to 0.
+const quantity = z.number({ error: 'Quantity must be a number' }).int('Quantity must be a whole number').min(0, 'Quantity cannot be negative').max(10_000, 'At most 10,000')
+
 export const plateBody = z.strictObject({
   code: z.string({ error: 'Enter a plate code' }).trim().min(1, 'Enter a plate code').max(40),
   crops: z.array(z.enum(CROPS, { error: 'Choose a crop from the list' })).min(1, 'Pick at least one crop').max(8),
@@ -89,17 +99,17 @@ export const plateBody = z.strictObject({
   cellDescription: optionalText(120),
   seedsPerLbMin: z.number().int().min(1).max(100_000).nullable().optional(),
   seedsPerLbMax: z.number().int().min(1).max(100_000).nullable().optional(),
-  quantityOnHand: z.number().int('Quantity must be a whole number').min(0, 'Quantity cannot be negative').max(10_000).default(0),
+  quantityOnHand: quantity.default(0),
   wearNotes: optionalText(500),
 })
-export const platePatch = z.strictObject({ ...plateBody.shape, quantityOnHand: plateBody.shape.quantityOnHand.optional() }).partial()
+export const platePatch = z.strictObject({ ...plateBody.shape, quantityOnHand: quantity }).partial()
 
 export const sprocketBody = z.strictObject({
   teeth: teeth('Teeth'),
   chainPitch: shortText(20).min(1).default('#40'),
-  quantityOnHand: z.number().int('Quantity must be a whole number').min(0, 'Quantity cannot be negative').max(10_000).default(0),
+  quantityOnHand: quantity.default(0),
 })
-export const sprocketPatch = z.strictObject({ quantityOnHand: sprocketBody.shape.quantityOnHand, chainPitch: shortText(20).min(1) }).partial()
+export const sprocketPatch = z.strictObject({ quantityOnHand: quantity, chainPitch: shortText(20).min(1) }).partial()
 
 export const solveBody = z.strictObject({
   targetSeedsPerAcre: positive('Target population', 2_000_000).optional(),

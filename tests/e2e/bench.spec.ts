@@ -12,6 +12,11 @@ test('the operator changes a sprocket, applies a suggestion, saves a setup and r
   await page.getByLabel('Stage 1 driver', { exact: true }).selectOption('21')
   // 21/23 × 17/26 → 42,041 seeds/acre (computed with the same formula).
   await expect(population).toHaveText('42,041')
+  await page.getByLabel('Drive slip').fill('60')
+  await expect(page.getByTestId('bench-problems')).toContainText('Slip must be from 0 to 50 %')
+  await expect(page.getByRole('button', { name: 'Save setup' })).toBeDisabled()
+  await page.getByLabel('Drive slip').fill('3')
+  await expect(page.getByTestId('bench-problems')).toHaveCount(0)
   await page.getByLabel('Target seeding rate').fill('32000')
   await page.getByRole('button', { name: 'Find plate and sprockets' }).click()
   const suggestions = page.getByTestId('suggestions')
