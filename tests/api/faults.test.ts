@@ -1,5 +1,4 @@
-import { describe, expect, it } from 'vitest'
-import { inject } from 'vitest'
+import { describe, expect, inject, it } from 'vitest'
 import { Client, createFarm, sql, TEST_PASSWORD } from './helpers'
 import { dbRestart } from '../../scripts/lib/pg.mjs'
 import { startTestServer } from '../../scripts/lib/test-server.mjs'
