@@ -47,6 +47,8 @@ export default defineNuxtConfig({
     mailFrom: 'Rowbench <no-reply@rowbench.test>',
     mailboxDir: '',
     uploadDir: '.data/uploads',
+    // 'fs': files under uploadDir; 'config': keep nitro.storage.uploads below as configured.
+    uploadStorage: 'fs',
     session: {
       name: 'rowbench-session',
       maxAge: 60 * 60 * 24 * 14,
@@ -55,6 +57,9 @@ export default defineNuxtConfig({
     public: { appUrl: 'http://127.0.0.1:3000' },
   },
   nitro: {
+    // Uploaded CSVs and photos (server/utils/uploads.ts). For object storage swap the driver, e.g.
+    // { driver: 's3', bucket, endpoint, region, accessKeyId, secretAccessKey }, and set NUXT_UPLOAD_STORAGE=config.
+    storage: { uploads: { driver: 'fs', base: './.data/uploads' } },
     routeRules: { '/**': { headers: securityHeaders } },
   },
   typescript: { strict: true },

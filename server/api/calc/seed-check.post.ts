@@ -1,0 +1,7 @@
+import { seedCheckBody } from '#shared/schemas/calc'
+
+export default defineEventHandler(async (event) => {
+  await requireMember(event)
+  const body = await validBody(event, seedCheckBody)
+  return seedCheckRate(body)
+})

@@ -1,0 +1,7 @@
+import { standCountBody } from '#shared/schemas/calc'
+
+export default defineEventHandler(async (event) => {
+  await requireMember(event)
+  const body = await validBody(event, standCountBody)
+  return standCountSummary(body)
+})

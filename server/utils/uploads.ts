@@ -1,0 +1,120 @@
+/**
+ * Uploaded files (CSV and text, JPEG, PNG, WebP) for any area of Rowbench.
+ *
+ * The bytes live in Nitro's `uploads` storage mount: the file system under .data/uploads by
+ * default (nuxt.config.ts `nitro.storage.uploads`; `NUXT_UPLOAD_DIR` moves it at run time), or any
+ * unstorage driver such as S3 when `NUXT_UPLOAD_STORAGE=config` keeps the mount as configured. A row
+ * in the `uploads` table records the owning farm, the storage key, the type, the size and who sent it.
+ *
+ * API (auto-imported on the server):
+ * - `receiveUpload(event, member, { accept, fileName })` reads the raw request body (the file itself,
+ *   not a multipart form). More than UPLOAD_MAX_BYTES (by Content-Length or by the bytes actually
+ *   read) is a 413 before anything is stored; an empty body a 400; a type found in the bytes that is
+ *   not in `accept` a 415. Then stores the bytes and writes the row and an audit entry in one
+ *   transaction, and returns the row.
+ * - `readUpload(farmId, id)` gives `{ upload, bytes }`; another farm's or a missing file is a 404.
+ * - `assertFarmUploads(tx, farmId, ids, accept?, field?)` is a 400 unless every id is one of the
+ *   farm's uploads (of an accepted type); use it before linking uploads to a record.
+ * - `sniffUploadType(bytes)` names the type from the content, or null.
+ */
+import { randomUUID } from 'node:crypto'
+import type { H3Event } from 'h3'
+import { and, eq, inArray } from 'drizzle-orm'
+import type { Member } from './membership'
+import type { Tx } from './db'
+
+export const UPLOAD_MAX_BYTES = 10 * 1024 * 1024
+export const UPLOAD_TYPES = ['text/csv', 'image/jpeg', 'image/png', 'image/webp'] as const
+export type UploadType = (typeof UPLOAD_TYPES)[number]
+export type UploadRow = typeof schema.uploads.$inferSelect
+
+const storage = () => useStorage('uploads')
+const MB = UPLOAD_MAX_BYTES / 1024 / 1024
+const tooLarge = () => createError({ statusCode: 413, message: `The file is larger than ${MB} MB; nothing was stored` })
+
+// Text is UTF-8 (an optional byte-order mark) with no control characters but tab, line breaks and form feed.
+function looksLikeText(bytes: Uint8Array): boolean {
+  try {
+    new TextDecoder('utf-8', { fatal: true }).decode(bytes)
+  } catch {
+    return false
+  }
+  for (const b of bytes) if (b < 0x20 && b !== 0x09 && b !== 0x0a && b !== 0x0d && b !== 0x0c) return false
+  return true
+}
+
+export function sniffUploadType(bytes: Uint8Array): UploadType | null {
+  const at = (i: number, ...sig: number[]) => sig.every((s, j) => bytes[i + j] === s)
+  if (at(0, 0xff, 0xd8, 0xff)) return 'image/jpeg'
+  if (at(0, 0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a)) return 'image/png'
+  if (at(0, 0x52, 0x49, 0x46, 0x46) && at(8, 0x57, 0x45, 0x42, 0x50)) return 'image/webp'
+  return bytes.length && looksLikeText(bytes) ? 'text/csv' : null
+}
+
+// The body, refused with a 413 as soon as it passes the limit. The rest is read and dropped (up to
+// a bound) so the client gets the answer instead of a reset connection.
+async function readCapped(event: H3Event, max: number): Promise<Buffer> {
+  const declared = Number(getRequestHeader(event, 'content-length'))
+  const req = event.node.req
+  if (Number.isFinite(declared) && declared > max * 3) {
+    setResponseHeader(event, 'Connection', 'close')
+    throw tooLarge()
+  }
+  let over = Number.isFinite(declared) && declared > max
+  const chunks: Buffer[] = []
+  let total = 0
+  for await (const chunk of req as AsyncIterable<Buffer>) {
+    total += chunk.length
+    if (total > max) over = true
+    if (!over) chunks.push(chunk)
+    else if (total > max * 3) {
+      setResponseHeader(event, 'Connection', 'close')
+      break
+    }
+  }
+  if (over) throw tooLarge()
+  return Buffer.concat(chunks)
+}
+
+export async function receiveUpload(event: H3Event, member: Member, opts: { accept?: readonly UploadType[], fileName?: string | null } = {}): Promise<UploadRow> {
+  const accept = opts.accept ?? UPLOAD_TYPES
+  const bytes = await readCapped(event, UPLOAD_MAX_BYTES)
+  if (!bytes.length) badRequest('The file is empty', { file: 'Choose a file that is not empty' })
+  const type = sniffUploadType(bytes)
+  if (!type || !accept.includes(type)) {
+    throw createError({ statusCode: 415, message: `This file is not ${accept.map((t) => t === 'text/csv' ? 'CSV or text' : t.slice(6).toUpperCase()).join(', ')}; nothing was stored` })
+  }
+  const storageKey = `farm-${member.farmId}:${randomUUID()}`
+  let written = false
+  try {
+    return await useDb().transaction(async (tx) => {
+      const [row] = await tx.insert(schema.uploads).values({ farmId: member.farmId, storageKey, contentType: type, sizeBytes: bytes.length, fileName: opts.fileName ?? null, uploadedBy: member.user.id }).returning()
+      await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'upload', entity: 'upload', entityId: row!.id, after: row })
+      await storage().setItemRaw(storageKey, bytes)
+      written = true
+      return row!
+    })
+  } catch (err) {
+    // The row was rolled back; the bytes must go too.
+    if (written) await storage().removeItem(storageKey).catch(() => {})
+    throw err
+  }
+}
+
+export async function readUpload(farmId: number, id: number): Promise<{ upload: UploadRow, bytes: Buffer }> {
+  const [upload] = await useDb().select().from(schema.uploads).where(and(eq(schema.uploads.id, id), eq(schema.uploads.farmId, farmId)))
+  if (!upload) notFound('File')
+  const raw = await storage().getItemRaw(upload.storageKey)
+  if (raw == null) notFound('File')
+  const bytes = Buffer.isBuffer(raw) ? raw : Buffer.from(raw as ArrayBuffer)
+  return { upload, bytes }
+}
+
+export async function assertFarmUploads(tx: Tx, farmId: number, ids: number[], accept: readonly UploadType[] = UPLOAD_TYPES, field = 'photoUploadIds'): Promise<UploadRow[]> {
+  const unique = [...new Set(ids)]
+  if (!unique.length) return []
+  const rows = await tx.select().from(schema.uploads).where(and(eq(schema.uploads.farmId, farmId), inArray(schema.uploads.id, unique)))
+  const ok = rows.filter((r) => accept.includes(r.contentType as UploadType))
+  if (ok.length !== unique.length) badRequest('An attached file is unknown or of the wrong type', { [field]: 'Unknown file or wrong type' })
+  return ok
+}

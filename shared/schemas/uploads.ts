@@ -1,0 +1,5 @@
+import { z } from 'zod'
+
+export const uploadQuery = z.object({
+  name: z.string().trim().min(1).max(200, 'Use a file name of at most 200 characters').optional(),
+})
