@@ -23,6 +23,8 @@ export const KIND_LABELS: Record<CheckKind, string> = {
 export interface SeedDropRowResult { row: number, seedsCounted: number, lengthFt: number, seedsPerAcre: number }
 
 export interface SeedDropResults {
+  // length: seed dug or caught over a measured length; revolutions: over N turns of the drive wheel.
+  basis: 'length' | 'revolutions'
   rows: SeedDropRowResult[]
   lengthFt: number
   rowSpacingIn: number
@@ -48,6 +50,7 @@ export interface StandCountResults extends StandCountSummary {
   targetStand: number | null
   errorVsTargetPercent: number | null
   seedsDroppedPerAcre: number | null
+  seedsDroppedFrom: string | null
   // Plants ÷ seeds dropped × 100.
   survivalPercent: number | null
 }
@@ -60,3 +63,7 @@ export interface SpacingResults extends SpacingQuality {
 }
 
 export type CheckResults = SeedDropResults | StandCountResults | SpacingResults
+
+// Who takes checks in the field, and who reviews them.
+export const CHECK_TAKER_ROLES = ['owner', 'agronomist', 'operator'] as const
+export const CHECK_REVIEWER_ROLES = ['owner', 'agronomist'] as const

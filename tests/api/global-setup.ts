@@ -8,6 +8,7 @@ export default async function setup(project: TestProject) {
   project.provide('baseUrl', server.baseUrl)
   project.provide('databaseUrl', server.databaseUrl)
   project.provide('mailbox', server.mailbox)
+  project.provide('uploadsDir', server.uploads)
   return async () => server.stop()
 }
 
@@ -16,5 +17,6 @@ declare module 'vitest' {
     baseUrl: string
     databaseUrl: string
     mailbox: string
+    uploadsDir: string
   }
 }

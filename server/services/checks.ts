@@ -1,0 +1,247 @@
+import Decimal from 'decimal.js'
+import { and, desc, eq, lt, sql } from 'drizzle-orm'
+import { alias } from 'drizzle-orm/pg-core'
+import type { z } from 'zod'
+import type { applySlipBody, checkCreateBody, checkListQuery, checkReviewBody, SeedDropCheckBody, SpacingCheckBody, StandCountCheckBody } from '#shared/schemas/checks'
+import type { CheckResults, SeedDropResults, SpacingResults, StandCountResults } from '#shared/types/checks'
+import type { SetupConfig, SetupResults } from '#shared/types/setup'
+import type { Member } from '../utils/membership'
+import { solvePlanter } from './equipment'
+import { getRevision } from './setups'
+
+const { fieldChecks, setups, planters, users } = schema
+
+interface RevisionRef { setupId: number, revision: number, planterId: number, config: SetupConfig, results: SetupResults }
+
+const pct = (a: Decimal.Value, b: Decimal.Value) => new Decimal(a).div(b).minus(1).mul(100).toNumber()
+
+async function revisionFor(member: Member, setupId: number | undefined, revision: number | undefined): Promise<RevisionRef | null> {
+  if (setupId === undefined) {
+    if (revision !== undefined) badRequest('A setup revision needs its setup', { setupId: 'Choose the setup' })
+    return null
+  }
+  const row = await getRevision(member.farmId, setupId, revision).catch(() => badRequest('Choose one of this farm\'s setups and one of its revisions', revision ? { setupRevision: `The setup has no revision ${revision}` } : { setupId: 'Unknown setup' }))
+  return { setupId, revision: row.rev.revision, planterId: row.setup.planterId, config: row.rev.config, results: row.rev.results }
+}
+
+// Seeds per acre on each row and for the planter; the error against the setup revision and the
+// target; the slip the count implies; and the solver's choice that lands on the target once the
+// difference found is allowed for.
+async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: RevisionRef): Promise<SeedDropResults> {
+  const rowSpacingIn = body.rowSpacingIn ?? rev.config.rowSpacingIn
+  // Over N turns of the drive wheel the seed dropped follows the gearing alone: the length is N
+  // rolling circumferences and the rate found is the rate at 0 % slip.
+  const basisRevolutions = body.wheelRevolutions !== undefined
+  const lengthFt = basisRevolutions ? new Decimal(body.wheelRevolutions!).mul(rev.config.wheelCircumferenceIn).div(12).toNumber() : body.lengthFt!
+  const rows = body.rows.map((r) => ({ row: r.row, seedsCounted: r.seedsCounted, lengthFt, seedsPerAcre: seedCheckRate({ seedsCounted: r.seedsCounted, lengthFt, rowSpacingIn }).seedsPerAcre }))
+  const counted = Decimal.sum(...rows.map((r) => r.seedsPerAcre)).div(rows.length)
+  const setupSlip = new Decimal(rev.config.slipPercent).div(100)
+  const onGround = basisRevolutions ? counted.mul(new Decimal(1).minus(setupSlip)) : counted
+  const setupRate = rev.results.seedsPerAcre
+  const target = rev.config.targetSeedsPerAcre
+  const implied = !basisRevolutions && setupRate > 0
+    ? impliedSlipPercent({ expectedSeedsPerAcre: new Decimal(setupRate).div(new Decimal(1).minus(setupSlip)).toNumber(), countedSeedsPerAcre: counted.toNumber() })
+    : null
+  // Found ÷ predicted; the solver predicts with the planter's slip, the setup with its own:
+  // solver target = target × (1 − planter slip) ÷ ((1 − setup slip) × found ÷ predicted).
+  const ratio = setupRate > 0 ? onGround.div(setupRate) : new Decimal(0)
+  const fix: SeedDropResults['fix'] = { solverTargetSeedsPerAcre: 0, choices: [], message: null }
+  if (ratio.isZero()) fix.message = 'No seed was counted, so no corrected choice can be worked out. Check that the meters turn and the hoppers feed.'
+  else {
+    const planter = await useDb().select({ slipPercent: planters.slipPercent }).from(planters).where(and(eq(planters.id, rev.planterId), eq(planters.farmId, member.farmId)))
+    const planterSlip = new Decimal(planter[0]?.slipPercent ?? rev.config.slipPercent).div(100)
+    fix.solverTargetSeedsPerAcre = new Decimal(target).mul(new Decimal(1).minus(planterSlip)).div(new Decimal(1).minus(setupSlip).mul(ratio)).toNumber()
+    const sectionId = rev.config.sections.find((s) => s.rows.includes(body.rows[0]!.row))?.sectionId ?? undefined
+    try {
+      const solved = await solvePlanter(member, rev.planterId, {
+        targetSeedsPerAcre: Math.min(fix.solverTargetSeedsPerAcre, 2_000_000), rowSpacingIn, sectionId,
+        crop: rev.config.crop as never, limit: 3,
+      })
+      fix.choices = solved.choices
+      if (!solved.choices.length) fix.message = 'The solver found no plate and sprockets on hand for this rate.'
+    } catch (err) {
+      fix.message = `The solver could not suggest a choice: ${(err as { message?: string }).message ?? 'unknown reason'}`
+    }
+  }
+  return {
+    basis: basisRevolutions ? 'revolutions' : 'length',
+    rows, lengthFt, rowSpacingIn,
+    seedsPerAcre: counted.toNumber(),
+    setupSeedsPerAcre: setupRate,
+    errorVsSetupPercent: setupRate > 0 ? pct(onGround, setupRate) : 0,
+    targetSeedsPerAcre: target,
+    targetFrom: 'setup',
+    errorVsTargetPercent: pct(onGround, target),
+    setupSlipPercent: rev.config.slipPercent,
+    impliedSlipPercent: implied,
+    slipStorable: implied !== null && implied >= 0 && implied <= 50,
+    fix,
+  }
+}
+
+async function standCountResults(member: Member, body: StandCountCheckBody, rev: RevisionRef | null): Promise<StandCountResults> {
+  const rowSpacingIn = body.rowSpacingIn ?? rev?.config.rowSpacingIn
+  if (rowSpacingIn === undefined) badRequest('Give the row spacing or choose the setup', { rowSpacingIn: 'Give the row spacing' })
+  const summary = standCountSummary({ counts: body.counts, lengthFt: body.lengthFt, rowSpacingIn })
+  const targetStand = body.targetStand ?? null
+  // The seed dropped: the latest seed-drop check on this setup revision, else its computed rate.
+  let seedsDroppedPerAcre: number | null = null
+  let seedsDroppedFrom: string | null = null
+  if (rev) {
+    const [drop] = await useDb().select({ id: fieldChecks.id, results: fieldChecks.results }).from(fieldChecks)
+      .where(and(eq(fieldChecks.farmId, member.farmId), eq(fieldChecks.kind, 'seed-drop'), eq(fieldChecks.setupId, rev.setupId), eq(fieldChecks.setupRevision, rev.revision)))
+      .orderBy(desc(fieldChecks.id)).limit(1)
+    if (drop) {
+      seedsDroppedPerAcre = (drop.results as SeedDropResults).seedsPerAcre
+      seedsDroppedFrom = `seed-drop check ${drop.id}`
+    } else {
+      seedsDroppedPerAcre = rev.results.seedsPerAcre
+      seedsDroppedFrom = `setup revision ${rev.revision}`
+    }
+  }
+  return {
+    ...summary, lengthFt: body.lengthFt, rowSpacingIn, targetStand,
+    errorVsTargetPercent: targetStand ? pct(summary.meanPerAcre, targetStand) : null,
+    seedsDroppedPerAcre, seedsDroppedFrom,
+    survivalPercent: seedsDroppedPerAcre ? new Decimal(summary.meanPerAcre).div(seedsDroppedPerAcre).mul(100).toNumber() : null,
+  }
+}
+
+async function spacingValues(member: Member, body: SpacingCheckBody): Promise<number[]> {
+  if (body.spacingsIn) return body.spacingsIn
+  const file = await readUpload(member.farmId, body.csvUploadId!).catch(() => badRequest('Choose a CSV file this farm uploaded', { csvUploadId: 'Unknown file' }))
+  if (file.upload.contentType !== 'text/csv') badRequest('The file is not a CSV or text file', { csvUploadId: 'Not a CSV file' })
+  const parsed = parseSpacingCsv(file.bytes.toString('utf8').replace(/^\uFEFF/, ''), body.csvColumn)
+  if (parsed.errors.length) {
+    const listed = parsed.errors.slice(0, 20).map((e) => `line ${e.line}: ${e.message}`).join('; ')
+    throw createError({ statusCode: 400, message: `The CSV has ${parsed.errors.length} line(s) Rowbench cannot read: ${listed}`, data: { fields: { csvUploadId: listed }, lines: parsed.errors.slice(0, 200) } })
+  }
+  if (!parsed.values.length) badRequest('The CSV holds no spacings', { csvUploadId: 'No spacings in the file' })
+  if (parsed.values.length > 100_000) badRequest('The CSV holds more than 100,000 spacings', { csvUploadId: 'Give at most 100,000 spacings' })
+  return parsed.values
+}
+
+async function spacingResults(member: Member, body: SpacingCheckBody, rev: RevisionRef | null): Promise<{ results: SpacingResults, spacingsIn: number[] }> {
+  const theoreticalIn = body.theoreticalIn ?? rev?.results.seedSpacingIn
+  if (!theoreticalIn) badRequest('Give the theoretical spacing or choose the setup', { theoreticalIn: 'Give the theoretical spacing' })
+  const spacingsIn = await spacingValues(member, body)
+  const q = spacingQuality({ spacingsIn, theoreticalIn })
+  return {
+    spacingsIn,
+    results: {
+      ...q, theoreticalIn,
+      histogram: spacingHistogram({ spacingsIn, theoreticalIn }),
+      cornYieldLossBuPerAcre: rev?.config.crop === 'corn' ? cornYieldLossFromSpacingSd({ spacingSdIn: q.sdIn }).buPerAcre : null,
+    },
+  }
+}
+
+export async function createCheck(member: Member, body: z.infer<typeof checkCreateBody>) {
+  const rev = await revisionFor(member, body.setupId, body.setupRevision)
+  let results: CheckResults
+  let inputs: Record<string, unknown> = { ...body }
+  let rows: number[] = []
+  if (body.kind === 'seed-drop') {
+    results = await seedDropResults(member, body, rev!)
+    rows = body.rows.map((r) => r.row)
+  } else if (body.kind === 'stand-count') {
+    results = await standCountResults(member, body, rev)
+    rows = body.rows ?? []
+  } else {
+    const s = await spacingResults(member, body, rev)
+    results = s.results
+    inputs = { ...body, spacingsIn: s.spacingsIn }
+    rows = body.row ? [body.row] : []
+  }
+  return useDb().transaction(async (tx) => {
+    await assertFarmUploads(tx, member.farmId, body.photoUploadIds ?? [], ['image/jpeg', 'image/png', 'image/webp'])
+    const [check] = await tx.insert(fieldChecks).values({
+      farmId: member.farmId, kind: body.kind, fieldId: body.fieldId ?? null, planId: body.planId ?? null,
+      setupId: rev?.setupId ?? null, setupRevision: rev?.revision ?? null, rows,
+      checkedOn: body.checkedOn ?? new Date().toISOString().slice(0, 10), authorId: member.user.id,
+      inputs, results, csvUploadId: body.kind === 'spacing' ? body.csvUploadId ?? null : null,
+      photoUploadIds: [...new Set(body.photoUploadIds ?? [])], note: body.note || null,
+    }).returning()
+    await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'create', entity: 'field_check', entityId: check!.id, after: { ...check!, inputs: undefined } })
+    return check!
+  })
+}
+
+const author = alias(users, 'author')
+const reviewer = alias(users, 'reviewer')
+
+const listColumns = {
+  id: fieldChecks.id, kind: fieldChecks.kind, fieldId: fieldChecks.fieldId, planId: fieldChecks.planId,
+  setupId: fieldChecks.setupId, setupRevision: fieldChecks.setupRevision, setupName: setups.name, rows: fieldChecks.rows,
+  checkedOn: fieldChecks.checkedOn, authorName: author.name, results: fieldChecks.results, note: fieldChecks.note,
+  reviewStatus: fieldChecks.reviewStatus, reviewComment: fieldChecks.reviewComment, reviewerName: reviewer.name, reviewedAt: fieldChecks.reviewedAt,
+  photoUploadIds: fieldChecks.photoUploadIds, csvUploadId: fieldChecks.csvUploadId,
+  slipAppliedPercent: fieldChecks.slipAppliedPercent, slipAppliedAt: fieldChecks.slipAppliedAt, createdAt: fieldChecks.createdAt,
+}
+
+export async function listChecks(farmId: number, q: z.infer<typeof checkListQuery>) {
+  const where = [eq(fieldChecks.farmId, farmId)]
+  if (q.kind) where.push(eq(fieldChecks.kind, q.kind))
+  if (q.setupId) where.push(eq(fieldChecks.setupId, q.setupId))
+  if (q.fieldId) where.push(eq(fieldChecks.fieldId, q.fieldId))
+  if (q.planId) where.push(eq(fieldChecks.planId, q.planId))
+  if (q.reviewStatus) where.push(eq(fieldChecks.reviewStatus, q.reviewStatus))
+  if (q.after) where.push(lt(fieldChecks.id, q.after))
+  const rows = await useDb().select(listColumns).from(fieldChecks)
+    .leftJoin(setups, eq(setups.id, fieldChecks.setupId))
+    .leftJoin(author, eq(author.id, fieldChecks.authorId))
+    .leftJoin(reviewer, eq(reviewer.id, fieldChecks.reviewedBy))
+    .where(and(...where)).orderBy(desc(fieldChecks.id)).limit(q.limit + 1)
+  const more = rows.length > q.limit
+  const items = more ? rows.slice(0, q.limit) : rows
+  return { items, nextAfter: more ? items[items.length - 1]!.id : null }
+}
+
+export async function getCheck(farmId: number, id: number) {
+  const [row] = await useDb().select({ ...listColumns, inputs: fieldChecks.inputs, planterId: setups.planterId, planterName: planters.name, planterSlipPercent: planters.slipPercent, planterConfigVersion: planters.configVersion })
+    .from(fieldChecks)
+    .leftJoin(setups, eq(setups.id, fieldChecks.setupId))
+    .leftJoin(planters, eq(planters.id, setups.planterId))
+    .leftJoin(author, eq(author.id, fieldChecks.authorId))
+    .leftJoin(reviewer, eq(reviewer.id, fieldChecks.reviewedBy))
+    .where(and(eq(fieldChecks.id, id), eq(fieldChecks.farmId, farmId)))
+  if (!row) notFound('Check')
+  return row
+}
+
+export async function reviewCheck(member: Member, id: number, body: z.infer<typeof checkReviewBody>) {
+  return useDb().transaction(async (tx) => {
+    const [before] = await tx.select({ reviewStatus: fieldChecks.reviewStatus, reviewComment: fieldChecks.reviewComment }).from(fieldChecks)
+      .where(and(eq(fieldChecks.id, id), eq(fieldChecks.farmId, member.farmId))).for('update')
+    if (!before) notFound('Check')
+    const [after] = await tx.update(fieldChecks).set({ reviewStatus: body.status, reviewComment: body.comment || null, reviewedBy: member.user.id, reviewedAt: new Date() })
+      .where(eq(fieldChecks.id, id)).returning({ id: fieldChecks.id, reviewStatus: fieldChecks.reviewStatus, reviewComment: fieldChecks.reviewComment, reviewedAt: fieldChecks.reviewedAt })
+    await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'review', entity: 'field_check', entityId: id, before, after })
+    return { ...after!, reviewerName: member.user.name }
+  })
+}
+
+// Stores the slip a seed-drop check implies on the planter of its setup, and records on the check
+// (and in the planter's audit entry) that it came from there.
+export async function applyCheckSlip(member: Member, id: number, body: z.infer<typeof applySlipBody>) {
+  return useDb().transaction(async (tx) => {
+    const [check] = await tx.select().from(fieldChecks).where(and(eq(fieldChecks.id, id), eq(fieldChecks.farmId, member.farmId))).for('update')
+    if (!check) notFound('Check')
+    const results = check.results as SeedDropResults
+    if (check.kind !== 'seed-drop' || !results.slipStorable || results.impliedSlipPercent === null) {
+      throw createError({ statusCode: 409, message: 'This check implies no drive slip that can be stored (only a seed-drop check over a measured length, with a slip from 0 to 50 %).' })
+    }
+    if (check.slipAppliedAt) throw createError({ statusCode: 409, message: 'The slip from this check is already stored on the planter.' })
+    const [setup] = check.setupId ? await tx.select({ planterId: setups.planterId }).from(setups).where(eq(setups.id, check.setupId)) : []
+    const [before] = setup ? await tx.select().from(planters).where(and(eq(planters.id, setup.planterId), eq(planters.farmId, member.farmId))).for('update') : []
+    if (!before) throw createError({ statusCode: 409, message: 'The planter of this check\'s setup no longer exists.' })
+    if (body.configVersion !== undefined && body.configVersion !== before.configVersion) {
+      throw createError({ statusCode: 409, message: 'Someone else changed this planter since you opened it. Reload to see their changes.' })
+    }
+    const slipPercent = new Decimal(results.impliedSlipPercent).toDecimalPlaces(2).toNumber()
+    const [after] = await tx.update(planters).set({ slipPercent, configVersion: sql`${planters.configVersion} + 1` }).where(eq(planters.id, before.id)).returning()
+    await tx.update(fieldChecks).set({ slipAppliedPercent: slipPercent, slipAppliedPlanterId: before.id, slipAppliedBy: member.user.id, slipAppliedAt: new Date() }).where(eq(fieldChecks.id, id))
+    await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'update', entity: 'planter', entityId: before.id, before: { slipPercent: before.slipPercent }, after: { slipPercent, fromCheckId: id } })
+    return { planterId: before.id, slipPercent: after!.slipPercent, configVersion: after!.configVersion, fromCheckId: id }
+  })
+}
