@@ -7,5 +7,8 @@ import fsDriver from 'unstorage/drivers/fs'
 export default defineNitroPlugin(() => {
   const config = useRuntimeConfig()
   if (config.uploadStorage === 'config' || !config.uploadDir) return
-  useStorage().mount('uploads', fsDriver({ base: resolve(String(config.uploadDir)) }))
+  const storage = useStorage()
+  // Without disposing, unmount takes effect at once (no await before it removes the mount).
+  void storage.unmount('uploads', false)
+  storage.mount('uploads', fsDriver({ base: resolve(String(config.uploadDir)) }))
 })
