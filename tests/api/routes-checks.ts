@@ -15,7 +15,7 @@ async function seedDropCheck(farm: TestFarm) {
 }
 
 async function upload(farm: TestFarm) {
-  const [u] = await sql<{ id: number }>(`insert into uploads (farm_id, storage_key, content_type, size_bytes) values ($1, 'farm-' || $1 || ':missing-' || floor(random() * 1e9)::text, 'text/csv', 4) returning id`, [farm.farmId])
+  const [u] = await sql<{ id: number }>(`insert into uploads (farm_id, storage_key, content_type, size_bytes) values ($1::int, 'farm-' || $1::text || ':missing-' || floor(random() * 1e9)::text, 'text/csv', 4) returning id`, [farm.farmId])
   return { id: u!.id }
 }
 
