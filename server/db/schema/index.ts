@@ -1,3 +1,4 @@
 export * from './accounts'
 export * from './equipment'
 export * from './setups'
+export * from './fields'
