@@ -9,9 +9,30 @@ import type { Member } from '../utils/membership'
 import { solvePlanter } from './equipment'
 import { getRevision } from './setups'
 
-const { fieldChecks, setups, planters, users } = schema
+const { fieldChecks, setups, planters, users, fields, cropPlans, seedLots } = schema
 
 interface RevisionRef { setupId: number, revision: number, planterId: number, config: SetupConfig, results: SetupResults }
+
+interface PlanRef { planId: number | null, fieldId: number | null, targetStand: number | null, targetSeedsPerAcre: number | null }
+
+// The field and crop plan a check was taken on, both of this farm; the plan gives the targets:
+// seeding rate = target stand ÷ (germination × survival), from the plan and its seed lot.
+async function planFor(member: Member, planId: number | undefined, fieldId: number | undefined): Promise<PlanRef> {
+  if (planId !== undefined) {
+    const [plan] = await useDb().select({ plan: cropPlans, germinationPercent: seedLots.germinationPercent }).from(cropPlans)
+      .leftJoin(seedLots, eq(seedLots.id, cropPlans.seedLotId))
+      .where(and(eq(cropPlans.id, planId), eq(cropPlans.farmId, member.farmId)))
+    if (!plan) badRequest('Choose one of this farm\'s crop plans', { planId: 'Unknown crop plan' })
+    if (fieldId !== undefined && fieldId !== plan.plan.fieldId) badRequest('The crop plan is for another field', { fieldId: 'This is not the plan\'s field' })
+    const targetSeedsPerAcre = seedingRateForStand({ targetStand: plan.plan.targetStand, germinationPercent: plan.germinationPercent ?? 100, survivalPercent: plan.plan.survivalPercent }).seedsPerAcre
+    return { planId, fieldId: plan.plan.fieldId, targetStand: plan.plan.targetStand, targetSeedsPerAcre }
+  }
+  if (fieldId !== undefined) {
+    const [field] = await useDb().select({ id: fields.id }).from(fields).where(and(eq(fields.id, fieldId), eq(fields.farmId, member.farmId)))
+    if (!field) badRequest('Choose one of this farm\'s fields', { fieldId: 'Unknown field' })
+  }
+  return { planId: null, fieldId: fieldId ?? null, targetStand: null, targetSeedsPerAcre: null }
+}
 
 const pct = (a: Decimal.Value, b: Decimal.Value) => new Decimal(a).div(b).minus(1).mul(100).toNumber()
 
@@ -27,7 +48,7 @@ async function revisionFor(member: Member, setupId: number | undefined, revision
 // Seeds per acre on each row and for the planter; the error against the setup revision and the
 // target; the slip the count implies; and the solver's choice that lands on the target once the
 // difference found is allowed for.
-async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: RevisionRef): Promise<SeedDropResults> {
+async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: RevisionRef, plan: PlanRef): Promise<SeedDropResults> {
   const rowSpacingIn = body.rowSpacingIn ?? rev.config.rowSpacingIn
   // Over N turns of the drive wheel the seed dropped follows the gearing alone: the length is N
   // rolling circumferences and the rate found is the rate at 0 % slip.
@@ -38,7 +59,7 @@ async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: Rev
   const setupSlip = new Decimal(rev.config.slipPercent).div(100)
   const onGround = basisRevolutions ? counted.mul(new Decimal(1).minus(setupSlip)) : counted
   const setupRate = rev.results.seedsPerAcre
-  const target = rev.config.targetSeedsPerAcre
+  const target = plan.targetSeedsPerAcre ?? rev.config.targetSeedsPerAcre
   const implied = !basisRevolutions && setupRate > 0
     ? impliedSlipPercent({ expectedSeedsPerAcre: new Decimal(setupRate).div(new Decimal(1).minus(setupSlip)).toNumber(), countedSeedsPerAcre: counted.toNumber() })
     : null
@@ -70,7 +91,7 @@ async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: Rev
     setupSeedsPerAcre: setupRate,
     errorVsSetupPercent: setupRate > 0 ? pct(onGround, setupRate) : 0,
     targetSeedsPerAcre: target,
-    targetFrom: 'setup',
+    targetFrom: plan.targetSeedsPerAcre ? 'plan' : 'setup',
     errorVsTargetPercent: pct(onGround, target),
     setupSlipPercent: rev.config.slipPercent,
     impliedSlipPercent: implied,
@@ -79,11 +100,11 @@ async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: Rev
   }
 }
 
-async function standCountResults(member: Member, body: StandCountCheckBody, rev: RevisionRef | null): Promise<StandCountResults> {
+async function standCountResults(member: Member, body: StandCountCheckBody, rev: RevisionRef | null, plan: PlanRef): Promise<StandCountResults> {
   const rowSpacingIn = body.rowSpacingIn ?? rev?.config.rowSpacingIn
   if (rowSpacingIn === undefined) badRequest('Give the row spacing or choose the setup', { rowSpacingIn: 'Give the row spacing' })
   const summary = standCountSummary({ counts: body.counts, lengthFt: body.lengthFt, rowSpacingIn })
-  const targetStand = body.targetStand ?? null
+  const targetStand = body.targetStand ?? plan.targetStand
   // The seed dropped: the latest seed-drop check on this setup revision, else its computed rate.
   let seedsDroppedPerAcre: number | null = null
   let seedsDroppedFrom: string | null = null
@@ -101,6 +122,7 @@ async function standCountResults(member: Member, body: StandCountCheckBody, rev:
   }
   return {
     ...summary, lengthFt: body.lengthFt, rowSpacingIn, targetStand,
+    targetFrom: body.targetStand !== undefined ? 'entered' : plan.targetStand !== null ? 'plan' : null,
     errorVsTargetPercent: targetStand ? pct(summary.meanPerAcre, targetStand) : null,
     seedsDroppedPerAcre, seedsDroppedFrom,
     survivalPercent: seedsDroppedPerAcre ? new Decimal(summary.meanPerAcre).div(seedsDroppedPerAcre).mul(100).toNumber() : null,
@@ -138,14 +160,15 @@ async function spacingResults(member: Member, body: SpacingCheckBody, rev: Revis
 
 export async function createCheck(member: Member, body: z.infer<typeof checkCreateBody>) {
   const rev = await revisionFor(member, body.setupId, body.setupRevision)
+  const plan = await planFor(member, body.planId, body.fieldId)
   let results: CheckResults
   let inputs: Record<string, unknown> = { ...body }
   let rows: number[] = []
   if (body.kind === 'seed-drop') {
-    results = await seedDropResults(member, body, rev!)
+    results = await seedDropResults(member, body, rev!, plan)
     rows = body.rows.map((r) => r.row)
   } else if (body.kind === 'stand-count') {
-    results = await standCountResults(member, body, rev)
+    results = await standCountResults(member, body, rev, plan)
     rows = body.rows ?? []
   } else {
     const s = await spacingResults(member, body, rev)
@@ -156,7 +179,7 @@ export async function createCheck(member: Member, body: z.infer<typeof checkCrea
   return useDb().transaction(async (tx) => {
     await assertFarmUploads(tx, member.farmId, body.photoUploadIds ?? [], ['image/jpeg', 'image/png', 'image/webp'])
     const [check] = await tx.insert(fieldChecks).values({
-      farmId: member.farmId, kind: body.kind, fieldId: body.fieldId ?? null, planId: body.planId ?? null,
+      farmId: member.farmId, kind: body.kind, fieldId: plan.fieldId, planId: plan.planId,
       setupId: rev?.setupId ?? null, setupRevision: rev?.revision ?? null, rows,
       checkedOn: body.checkedOn ?? new Date().toISOString().slice(0, 10), authorId: member.user.id,
       inputs, results, csvUploadId: body.kind === 'spacing' ? body.csvUploadId ?? null : null,
@@ -171,7 +194,7 @@ const author = alias(users, 'author')
 const reviewer = alias(users, 'reviewer')
 
 const listColumns = {
-  id: fieldChecks.id, kind: fieldChecks.kind, fieldId: fieldChecks.fieldId, planId: fieldChecks.planId,
+  id: fieldChecks.id, kind: fieldChecks.kind, fieldId: fieldChecks.fieldId, fieldName: fields.name, planId: fieldChecks.planId,
   setupId: fieldChecks.setupId, setupRevision: fieldChecks.setupRevision, setupName: setups.name, rows: fieldChecks.rows,
   checkedOn: fieldChecks.checkedOn, authorName: author.name, results: fieldChecks.results, note: fieldChecks.note,
   reviewStatus: fieldChecks.reviewStatus, reviewComment: fieldChecks.reviewComment, reviewerName: reviewer.name, reviewedAt: fieldChecks.reviewedAt,
@@ -189,6 +212,7 @@ export async function listChecks(farmId: number, q: z.infer<typeof checkListQuer
   if (q.after) where.push(lt(fieldChecks.id, q.after))
   const rows = await useDb().select(listColumns).from(fieldChecks)
     .leftJoin(setups, eq(setups.id, fieldChecks.setupId))
+    .leftJoin(fields, eq(fields.id, fieldChecks.fieldId))
     .leftJoin(author, eq(author.id, fieldChecks.authorId))
     .leftJoin(reviewer, eq(reviewer.id, fieldChecks.reviewedBy))
     .where(and(...where)).orderBy(desc(fieldChecks.id)).limit(q.limit + 1)
@@ -202,6 +226,7 @@ export async function getCheck(farmId: number, id: number) {
     .from(fieldChecks)
     .leftJoin(setups, eq(setups.id, fieldChecks.setupId))
     .leftJoin(planters, eq(planters.id, setups.planterId))
+    .leftJoin(fields, eq(fields.id, fieldChecks.fieldId))
     .leftJoin(author, eq(author.id, fieldChecks.authorId))
     .leftJoin(reviewer, eq(reviewer.id, fieldChecks.reviewedBy))
     .where(and(eq(fieldChecks.id, id), eq(fieldChecks.farmId, farmId)))

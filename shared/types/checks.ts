@@ -48,6 +48,7 @@ export interface StandCountResults extends StandCountSummary {
   lengthFt: number
   rowSpacingIn: number
   targetStand: number | null
+  targetFrom: 'entered' | 'plan' | null
   errorVsTargetPercent: number | null
   seedsDroppedPerAcre: number | null
   seedsDroppedFrom: string | null

@@ -120,6 +120,26 @@ describe('stored checks', () => {
     expect(list.data.items.map((i: { id: number }) => i.id)).toEqual([res.data.id])
   })
 
+  it('takes the target from the crop plan and links the plan\'s field', async () => {
+    const { farm, e, operator } = await farmWithSetup()
+    const [field] = await sql<{ id: number }>('insert into fields (farm_id, name, acres) values ($1, $2, 80) returning id', [farm.farmId, `Bottoms ${Date.now()}`])
+    const [plan] = await sql<{ id: number }>(`insert into crop_plans (farm_id, season, field_id, crop, target_stand, survival_percent, row_spacing_in, setup_id) values ($1, 2026, $2, 'corn', 32000, 95, 30, $3) returning id`, [farm.farmId, field!.id, e.setup])
+    const res = await operator.post('/api/checks', { kind: 'seed-drop', setupId: e.setup, planId: plan!.id, rows: [{ row: 1, seedsCounted: 34 }], lengthFt: 17.424 })
+    expect(res.status).toBe(201)
+    expect(res.data.fieldId).toBe(field!.id)
+    // Seeding rate = stand ÷ (germination × survival) (Ohio State University): 32,000 ÷ (1.00 × 0.95) = 33,684.2 (no seed lot, so 100 % germination).
+    expect(res.data.results.targetFrom).toBe('plan')
+    expect(res.data.results.targetSeedsPerAcre).toBeCloseTo(32_000 / 0.95, 6)
+    expect(res.data.results.errorVsTargetPercent).toBeCloseTo((34_000 / (32_000 / 0.95) - 1) * 100, 8)
+    const stand = await operator.post('/api/checks', { kind: 'stand-count', planId: plan!.id, counts: [31], lengthFt: 17.424, rowSpacingIn: 30 })
+    expect(stand.data.results).toMatchObject({ targetStand: 32000, targetFrom: 'plan' })
+    expect((await operator.get(`/api/checks?planId=${plan!.id}`)).data.items).toHaveLength(2)
+    const other = await (await createFarm()).as('operator')
+    const foreign = await other.post('/api/checks', { kind: 'stand-count', planId: plan!.id, counts: [31], lengthFt: 17.424, rowSpacingIn: 30 })
+    expect(foreign.status).toBe(400)
+    expect(foreign.data.data.fields.planId).toBe('Unknown crop plan')
+  })
+
   it('counts over wheel revolutions check the drive at 0 % slip and imply no slip', async () => {
     const { e, operator } = await farmWithSetup()
     // 10 turns of an 86.4 in wheel = 72 ft; 140 seeds at 30 in → 140 × 43,560 ÷ 180 = 33,880 (computed).

@@ -3,6 +3,7 @@ import { id, timestamps } from './_columns'
 import { farms, users } from './accounts'
 import { planters } from './equipment'
 import { setups } from './setups'
+import { cropPlans, fields } from './fields'
 import { CHECK_KINDS, REVIEW_STATUSES } from '../../../shared/types/checks'
 import type { CheckResults } from '../../../shared/types/checks'
 
@@ -30,9 +31,9 @@ export const fieldChecks = pgTable('field_checks', {
   id: id(),
   farmId: integer().notNull().references(() => farms.id, { onDelete: 'cascade' }),
   kind: checkKindEnum().notNull(),
-  // Crop fields and plans arrive with their own area; until then these are plain ids.
-  fieldId: integer(),
-  planId: integer(),
+  // A check outlives the field or plan it was taken on, so deleting those only unlinks it.
+  fieldId: integer().references(() => fields.id, { onDelete: 'set null' }),
+  planId: integer().references(() => cropPlans.id, { onDelete: 'set null' }),
   setupId: integer().references(() => setups.id, { onDelete: 'set null' }),
   setupRevision: integer(),
   rows: integer().array().notNull().default([]),

@@ -1,4 +1,5 @@
 export * from './accounts'
 export * from './equipment'
 export * from './setups'
+export * from './fields'
 export * from './checks'

@@ -41,6 +41,8 @@ CREATE TABLE "uploads" (
 );
 --> statement-breakpoint
 ALTER TABLE "field_checks" ADD CONSTRAINT "field_checks_farm_id_farms_id_fk" FOREIGN KEY ("farm_id") REFERENCES "public"."farms"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "field_checks" ADD CONSTRAINT "field_checks_field_id_fields_id_fk" FOREIGN KEY ("field_id") REFERENCES "public"."fields"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "field_checks" ADD CONSTRAINT "field_checks_plan_id_crop_plans_id_fk" FOREIGN KEY ("plan_id") REFERENCES "public"."crop_plans"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "field_checks" ADD CONSTRAINT "field_checks_setup_id_setups_id_fk" FOREIGN KEY ("setup_id") REFERENCES "public"."setups"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "field_checks" ADD CONSTRAINT "field_checks_author_id_users_id_fk" FOREIGN KEY ("author_id") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "field_checks" ADD CONSTRAINT "field_checks_csv_upload_id_uploads_id_fk" FOREIGN KEY ("csv_upload_id") REFERENCES "public"."uploads"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
