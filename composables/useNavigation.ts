@@ -9,6 +9,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/', label: 'Today', roles: ALL, hint: 'Your farm at a glance' },
   { to: '/bench', label: 'Setup bench', roles: ALL, hint: 'Plate and sprocket choices, live seed rate, the solver' },
   { to: '/setups', label: 'Setups', roles: ALL, hint: 'Saved setups, their history and discussion' },
+  { to: '/checks', label: 'Field checks', roles: ALL, hint: 'Seed drop, stand counts, spacing uniformity and the replant aid' },
   { to: '/planters', label: 'Equipment', roles: ALL, hint: 'Planters, row units and drive trains' },
   { to: '/inventory', label: 'Plates & sprockets', roles: ['owner', 'foreman', 'operator'], hint: 'What is on the shelf' },
   { to: '/members', label: 'People', roles: ['owner'], hint: 'Invite members and set their roles' },

@@ -1,5 +1,4 @@
-import { describe, expect, it } from 'vitest'
-import { inject } from 'vitest'
+import { describe, expect, inject, it } from 'vitest'
 import { readdir } from 'node:fs/promises'
 import { join } from 'node:path'
 import { baseUrl, createFarm, sql, type Client, type TestFarm } from './helpers'
@@ -18,7 +17,7 @@ async function storedFiles(dir = inject('uploadsDir')): Promise<string[]> {
 const uploadCount = async () => Number((await sql<{ n: number }>('select count(*)::int as n from uploads'))[0]!.n)
 
 async function sendFile(c: Client, bytes: Uint8Array | string, name = 'file.bin') {
-  const res = await fetch(`${baseUrl()}/api/uploads?name=${encodeURIComponent(name)}`, { method: 'POST', headers: { cookie: c.cookie, 'content-type': 'application/octet-stream' }, body: bytes })
+  const res = await fetch(`${baseUrl()}/api/uploads?name=${encodeURIComponent(name)}`, { method: 'POST', headers: { cookie: c.cookie, 'content-type': 'application/octet-stream' }, body: typeof bytes === 'string' ? bytes : new Blob([bytes as Uint8Array<ArrayBuffer>]) })
   return { status: res.status, data: await res.json() as Record<string, unknown> & { id: number, contentType: string, message: string } }
 }
 

@@ -1,0 +1,11 @@
+// What the checks page knows about the setup and field a check is taken on.
+export interface CheckContext {
+  setupId: number | null
+  setupRevision: number | null
+  fieldId: number | null
+  crop: string | null
+  rowSpacingIn: number | null
+  theoreticalIn: number | null
+  targetSeedsPerAcre: number | null
+  seedsPerAcre: number | null
+}
