@@ -5,6 +5,7 @@ import * as schema from '../../server/db/schema'
 import { seedAccounts } from './accounts'
 import { seedEquipment } from './equipment'
 import { seedFields } from './fields'
+import { seedChecks } from './checks'
 
 export type SeedDb = ReturnType<typeof drizzle<typeof schema>>
 
@@ -18,6 +19,7 @@ export async function seedDemo(url: string) {
       const accounts = await seedAccounts(tx as unknown as SeedDb)
       await seedEquipment(tx as unknown as SeedDb, accounts)
       await seedFields(tx as unknown as SeedDb, accounts)
+      await seedChecks(tx as unknown as SeedDb, accounts)
     })
     return true
   } finally {

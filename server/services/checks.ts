@@ -50,33 +50,19 @@ async function revisionFor(member: Member, setupId: number | undefined, revision
 // difference found is allowed for.
 async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: RevisionRef, plan: PlanRef): Promise<SeedDropResults> {
   const rowSpacingIn = body.rowSpacingIn ?? rev.config.rowSpacingIn
-  // Over N turns of the drive wheel the seed dropped follows the gearing alone: the length is N
-  // rolling circumferences and the rate found is the rate at 0 % slip.
-  const basisRevolutions = body.wheelRevolutions !== undefined
-  const lengthFt = basisRevolutions ? new Decimal(body.wheelRevolutions!).mul(rev.config.wheelCircumferenceIn).div(12).toNumber() : body.lengthFt!
-  const rows = body.rows.map((r) => ({ row: r.row, seedsCounted: r.seedsCounted, lengthFt, seedsPerAcre: seedCheckRate({ seedsCounted: r.seedsCounted, lengthFt, rowSpacingIn }).seedsPerAcre }))
-  const counted = Decimal.sum(...rows.map((r) => r.seedsPerAcre)).div(rows.length)
-  const setupSlip = new Decimal(rev.config.slipPercent).div(100)
-  const onGround = basisRevolutions ? counted.mul(new Decimal(1).minus(setupSlip)) : counted
-  const setupRate = rev.results.seedsPerAcre
   const target = plan.targetSeedsPerAcre ?? rev.config.targetSeedsPerAcre
-  const implied = !basisRevolutions && setupRate > 0
-    ? impliedSlipPercent({ expectedSeedsPerAcre: new Decimal(setupRate).div(new Decimal(1).minus(setupSlip)).toNumber(), countedSeedsPerAcre: counted.toNumber() })
-    : null
-  // Found ÷ predicted; the solver predicts with the planter's slip, the setup with its own:
-  // solver target = target × (1 − planter slip) ÷ ((1 − setup slip) × found ÷ predicted).
-  const ratio = setupRate > 0 ? onGround.div(setupRate) : new Decimal(0)
-  const fix: SeedDropResults['fix'] = { solverTargetSeedsPerAcre: 0, choices: [], message: null }
-  if (ratio.isZero()) fix.message = 'No seed was counted, so no corrected choice can be worked out. Check that the meters turn and the hoppers feed.'
+  const [planter] = await useDb().select({ slipPercent: planters.slipPercent }).from(planters).where(and(eq(planters.id, rev.planterId), eq(planters.farmId, member.farmId)))
+  const s = seedDropSummary({
+    rows: body.rows, lengthFt: body.lengthFt, wheelRevolutions: body.wheelRevolutions, rowSpacingIn, wheelCircumferenceIn: rev.config.wheelCircumferenceIn,
+    setupSeedsPerAcre: rev.results.seedsPerAcre, setupSlipPercent: rev.config.slipPercent, targetSeedsPerAcre: target, planterSlipPercent: planter?.slipPercent ?? rev.config.slipPercent,
+  })
+  const fix: SeedDropResults['fix'] = { solverTargetSeedsPerAcre: s.solverTargetSeedsPerAcre, choices: [], message: null }
+  if (!s.solverTargetSeedsPerAcre) fix.message = 'No seed was counted, so no corrected choice can be worked out. Check that the meters turn and the hoppers feed.'
   else {
-    const planter = await useDb().select({ slipPercent: planters.slipPercent }).from(planters).where(and(eq(planters.id, rev.planterId), eq(planters.farmId, member.farmId)))
-    const planterSlip = new Decimal(planter[0]?.slipPercent ?? rev.config.slipPercent).div(100)
-    fix.solverTargetSeedsPerAcre = new Decimal(target).mul(new Decimal(1).minus(planterSlip)).div(new Decimal(1).minus(setupSlip).mul(ratio)).toNumber()
-    const sectionId = rev.config.sections.find((s) => s.rows.includes(body.rows[0]!.row))?.sectionId ?? undefined
+    const sectionId = rev.config.sections.find((sec) => sec.rows.includes(body.rows[0]!.row))?.sectionId ?? undefined
     try {
       const solved = await solvePlanter(member, rev.planterId, {
-        targetSeedsPerAcre: Math.min(fix.solverTargetSeedsPerAcre, 2_000_000), rowSpacingIn, sectionId,
-        crop: rev.config.crop as never, limit: 3,
+        targetSeedsPerAcre: Math.min(s.solverTargetSeedsPerAcre, 2_000_000), rowSpacingIn, sectionId, crop: rev.config.crop as never, limit: 3,
       })
       fix.choices = solved.choices
       if (!solved.choices.length) fix.message = 'The solver found no plate and sprockets on hand for this rate.'
@@ -84,18 +70,13 @@ async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: Rev
       fix.message = `The solver could not suggest a choice: ${(err as { message?: string }).message ?? 'unknown reason'}`
     }
   }
+  const { solverTargetSeedsPerAcre: _t, ...summary } = s
   return {
-    basis: basisRevolutions ? 'revolutions' : 'length',
-    rows, lengthFt, rowSpacingIn,
-    seedsPerAcre: counted.toNumber(),
-    setupSeedsPerAcre: setupRate,
-    errorVsSetupPercent: setupRate > 0 ? pct(onGround, setupRate) : 0,
+    ...summary, rowSpacingIn,
+    setupSeedsPerAcre: rev.results.seedsPerAcre,
     targetSeedsPerAcre: target,
     targetFrom: plan.targetSeedsPerAcre ? 'plan' : 'setup',
-    errorVsTargetPercent: pct(onGround, target),
     setupSlipPercent: rev.config.slipPercent,
-    impliedSlipPercent: implied,
-    slipStorable: implied !== null && implied >= 0 && implied <= 50,
     fix,
   }
 }
