@@ -28,6 +28,7 @@ export const UPLOAD_TYPES = ['text/csv', 'image/jpeg', 'image/png', 'image/webp'
 export type UploadType = (typeof UPLOAD_TYPES)[number]
 export type UploadRow = typeof schema.uploads.$inferSelect
 
+const TYPE_NAMES: Record<UploadType, string> = { 'text/csv': 'CSV or text', 'image/jpeg': 'JPEG', 'image/png': 'PNG', 'image/webp': 'WebP' }
 const storage = () => useStorage('uploads')
 const MB = UPLOAD_MAX_BYTES / 1024 / 1024
 const tooLarge = () => createError({ statusCode: 413, message: `The file is larger than ${MB} MB; nothing was stored` })
@@ -82,7 +83,9 @@ export async function receiveUpload(event: H3Event, member: Member, opts: { acce
   if (!bytes.length) badRequest('The file is empty', { file: 'Choose a file that is not empty' })
   const type = sniffUploadType(bytes)
   if (!type || !accept.includes(type)) {
-    throw createError({ statusCode: 415, message: `This file is not ${accept.map((t) => t === 'text/csv' ? 'CSV or text' : t.slice(6).toUpperCase()).join(', ')}; nothing was stored` })
+    const names = accept.map((t) => TYPE_NAMES[t])
+    const list = names.length > 1 ? `${names.slice(0, -1).join(', ')} or ${names[names.length - 1]}` : names[0]
+    throw createError({ statusCode: 415, message: `This file is not ${list}; nothing was stored` })
   }
   const storageKey = `farm-${member.farmId}:${randomUUID()}`
   let written = false

@@ -279,8 +279,13 @@ describe('uploads', () => {
     const rowsBefore = await uploadCount()
     const pdf = await sendFile(c, new TextEncoder().encode('%PDF-1.7\n\u0000\u0001binary'), 'report.csv')
     expect(pdf.status).toBe(415)
+    expect(pdf.data.message).toBe('This file is not CSV or text, JPEG, PNG or WebP; nothing was stored')
     expect((await sendFile(c, new Uint8Array([0xc3, 0x28, 0x41]), 'bad-utf8.csv')).status).toBe(415)
     expect((await sendFile(c, new Uint8Array(0), 'empty.csv')).status).toBe(400)
+    // A caller can narrow the types: a CSV where a photo is expected is refused before it is stored.
+    const notPhoto = await fetch(`${baseUrl()}/api/uploads?kind=photo`, { method: 'POST', headers: { cookie: c.cookie }, body: 'spacing\n6\n' })
+    expect(notPhoto.status).toBe(415)
+    expect((await notPhoto.json()).message).toMatch(/not JPEG, PNG or WebP; nothing was stored/)
     expect(await uploadCount()).toBe(rowsBefore)
   })
 
