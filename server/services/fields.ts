@@ -198,7 +198,7 @@ export async function importFields(member: Member, body: z.infer<typeof fieldImp
       const message = parsed.rows.length
         ? `${n} ${n === 1 ? 'line needs' : 'lines need'} attention; nothing was imported`
         : `No line can be imported; ${n} ${n === 1 ? 'line needs' : 'lines need'} attention`
-      throw createError({ statusCode: 400, statusMessage: 'Bad Request', message, data: { fields: { csv: message }, errors: parsed.errors } })
+      throw createError({ statusCode: 400, statusMessage: 'Bad Request', message, data: { fields: { csv: message }, errors: parsed.errors, valid: parsed.rows.length, dataRows: parsed.dataRows } })
     }
     if (!parsed.rows.length) badRequest('The file has no fields to import', { csv: 'Add at least one line below the header' })
     const created = await tx.insert(fields).values(parsed.rows.map((r) => ({ ...r.field, farmId: member.farmId }))).returning()
