@@ -15,8 +15,8 @@ export const PLAN_NEXT: Record<PlanStatus, PlanStatus[]> = {
 export const PLAN_STATUS_ROLES: Record<PlanStatus, Role[]> = {
   'draft': [],
   'submitted': ['owner', 'operator', 'foreman'],
-  'approved': ['owner', 'agronomist'],
-  'changes-requested': ['owner', 'agronomist'],
+  'approved': ['agronomist', 'owner'],
+  'changes-requested': ['agronomist', 'owner'],
   'set-up': ['owner', 'operator', 'foreman'],
   'planted': ['owner', 'operator', 'foreman'],
 }

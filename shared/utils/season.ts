@@ -193,3 +193,8 @@ export function summariseSeason(plans: SeasonPlan[], opts: { hoursPerDay: number
     unscheduledAcres: unscheduled.toNumber(),
   }
 }
+
+// The season being planned: from August on, next spring's.
+export function defaultSeason(now: Date = new Date()): number {
+  return now.getUTCMonth() >= 7 ? now.getUTCFullYear() + 1 : now.getUTCFullYear()
+}
