@@ -35,6 +35,8 @@ export interface PlanItem {
   approvedAt: string | null
   plantedOn: string | null
   plantedAcres: number | null
+  createdAt: string
+  updatedAt: string
   setupChangedSinceApproval: boolean
   seed: PlanSeed
 }
