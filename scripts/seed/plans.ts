@@ -33,7 +33,8 @@ export async function seedPlans(db: SeedDb, a: Accounts, eq: Equipment, made: { 
   const [north, creek] = eq.planters
   const [cornSetup, beanSetup] = eq.setups
   const day = (n: number) => new Date(Date.UTC(DEMO_SEASON, 3, 19 + n)).toISOString().slice(0, 10)
-  const ago = (days: number) => new Date(Date.now() - days * 86_400_000)
+  // Events fall after the setups' last revision (saved a day before the seed runs).
+  const ago = (hours: number) => new Date(Date.now() - hours * 3_600_000)
 
   for (const [i, p] of PLANS.entries()) {
     const field = fieldRows.find((f) => f.name === p.field)
@@ -50,21 +51,21 @@ export async function seedPlans(db: SeedDb, a: Accounts, eq: Equipment, made: { 
       planterId: onNorth ? north!.id : creek!.id, speedMph: onNorth ? 5 : 4.5, marginPercent: 5, sortOrder: p.order,
       notes: p.notes ?? null, status, createdBy: a.agronomist.id,
       ...(status === 'draft' ? {} : { setupId: setup.id, proposedBy: a.operator.id }),
-      ...(['approved', 'set-up', 'planted'].includes(status) ? { approvedRevision: setup.latestRevision, approvedBy: a.agronomist.id, approvedAt: ago(20) } : {}),
+      ...(['approved', 'set-up', 'planted'].includes(status) ? { approvedRevision: setup.latestRevision, approvedBy: a.agronomist.id, approvedAt: ago(10) } : {}),
       ...(status === 'planted' ? { plantedOn: day(p.start + 1), plantedAcres: field.acres } : {}),
     }).returning()
-    const events: (typeof schema.planEvents.$inferInsert)[] = [{ planId: plan!.id, fromStatus: null, toStatus: 'draft', comment: 'Plan created', userId: a.agronomist.id, createdAt: ago(40) }]
-    if (status !== 'draft') events.push({ planId: plan!.id, fromStatus: 'draft', toStatus: 'submitted', setupRevision: setup.latestRevision, comment: 'Proposing the shop setup; the seed-drop check was close.', userId: a.operator.id, createdAt: ago(30) })
-    if (status === 'changes-requested') events.push({ planId: plan!.id, fromStatus: 'submitted', toStatus: 'changes-requested', comment: 'The knob cannot carry 34,000; set the drive for 28,000 and check the depth in the sand.', userId: a.agronomist.id, createdAt: ago(25) })
-    if (['approved', 'set-up', 'planted'].includes(status)) events.push({ planId: plan!.id, fromStatus: 'submitted', toStatus: 'approved', setupRevision: setup.latestRevision, comment: 'Looks right for this ground.', userId: a.agronomist.id, createdAt: ago(20) })
-    if (['set-up', 'planted'].includes(status)) events.push({ planId: plan!.id, fromStatus: 'approved', toStatus: 'set-up', setupRevision: setup.latestRevision, comment: 'Sprockets changed and chain guards back on.', userId: a.foreman.id, createdAt: ago(10) })
-    if (status === 'planted') events.push({ planId: plan!.id, fromStatus: 'set-up', toStatus: 'planted', setupRevision: setup.latestRevision, comment: null, userId: a.operator.id, createdAt: ago(5) })
+    const events: (typeof schema.planEvents.$inferInsert)[] = [{ planId: plan!.id, fromStatus: null, toStatus: 'draft', comment: 'Plan created', userId: a.agronomist.id, createdAt: ago(20) }]
+    if (status !== 'draft') events.push({ planId: plan!.id, fromStatus: 'draft', toStatus: 'submitted', setupRevision: setup.latestRevision, comment: 'Proposing the shop setup; the seed-drop check was close.', userId: a.operator.id, createdAt: ago(16) })
+    if (status === 'changes-requested') events.push({ planId: plan!.id, fromStatus: 'submitted', toStatus: 'changes-requested', comment: 'The knob cannot carry 34,000; set the drive for 28,000 and check the depth in the sand.', userId: a.agronomist.id, createdAt: ago(12) })
+    if (['approved', 'set-up', 'planted'].includes(status)) events.push({ planId: plan!.id, fromStatus: 'submitted', toStatus: 'approved', setupRevision: setup.latestRevision, comment: 'Looks right for this ground.', userId: a.agronomist.id, createdAt: ago(10) })
+    if (['set-up', 'planted'].includes(status)) events.push({ planId: plan!.id, fromStatus: 'approved', toStatus: 'set-up', setupRevision: setup.latestRevision, comment: 'Sprockets changed and chain guards back on.', userId: a.foreman.id, createdAt: ago(6) })
+    if (status === 'planted') events.push({ planId: plan!.id, fromStatus: 'set-up', toStatus: 'planted', setupRevision: setup.latestRevision, comment: null, userId: a.operator.id, createdAt: ago(2) })
     await db.insert(schema.planEvents).values(events)
     if (i < 2) {
       await db.insert(schema.planComments).values([
-        { planId: plan!.id, userId: a.agronomist.id, body: 'The low end holds water; plant it last in the day.', createdAt: ago(35) },
-        { planId: plan!.id, userId: a.operator.id, body: 'Noted. I will slow to 4.5 mph through there.', createdAt: ago(34) },
-        { planId: plan!.id, userId: a.foreman.id, body: 'Spare chain for the second stage is on the truck.', createdAt: ago(33) },
+        { planId: plan!.id, userId: a.agronomist.id, body: 'The low end holds water; plant it last in the day.', createdAt: ago(18) },
+        { planId: plan!.id, userId: a.operator.id, body: 'Noted. I will slow to 4.5 mph through there.', createdAt: ago(17) },
+        { planId: plan!.id, userId: a.foreman.id, body: 'Spare chain for the second stage is on the truck.', createdAt: ago(15) },
       ])
     }
   }

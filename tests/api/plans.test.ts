@@ -109,7 +109,9 @@ describe('crop plans', () => {
     const mail = await waitForMail((m) => m.to.includes(farm.users.operator.email) && /approved/i.test(m.subject))
     expect(mail.text).toContain('Good to go')
     expect(mail.text).toContain(`/plans/${plan.id}`)
-    // The owner hears of it too; the agronomist who acted does not get a copy.
+    // Queued in the outbox with the move and sent from there; the agronomist who acted gets no copy.
+    const queued = await sql<{ to: string }>(`select "to" from outbox where subject like '%: approved' and text like $1`, [`%/plans/${plan.id}%`])
+    expect(queued.map((q) => q.to).sort()).toEqual([farm.users.operator.email, farm.users.owner.email].sort())
     await waitForMail((m) => m.to.includes(farm.users.owner.email) && /approved/i.test(m.subject) && m.text.includes(`/plans/${plan.id}`))
 
     const events = approved.data.events as { fromStatus: string | null, toStatus: string, userId: number, comment: string | null, setupRevision: number | null }[]
