@@ -12,6 +12,10 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/checks', label: 'Field checks', roles: ALL, hint: 'Seed drop, stand counts, spacing uniformity and the replant aid' },
   { to: '/planters', label: 'Equipment', roles: ALL, hint: 'Planters, row units and drive trains' },
   { to: '/inventory', label: 'Plates & sprockets', roles: ['owner', 'foreman', 'operator'], hint: 'What is on the shelf' },
+  { to: '/fields', label: 'Fields', roles: ALL, hint: 'Acres, soils, tillage and outlines' },
+  { to: '/seed-lots', label: 'Seed lots', roles: ALL, hint: 'Varieties, seed size, germination and units on hand' },
+  { to: '/plans', label: 'Plans', roles: ALL, hint: 'Crop plans per field, their review and setups' },
+  { to: '/season', label: 'Season', roles: ALL, hint: 'Seed needs, planting days and the seed order' },
   { to: '/members', label: 'People', roles: ['owner'], hint: 'Invite members and set their roles' },
   { to: '/mailbox', label: 'Mailbox', roles: ['owner'], hint: 'Messages Rowbench sent (demo mailbox)' },
 ]

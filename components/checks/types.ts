@@ -3,6 +3,7 @@ export interface CheckContext {
   setupId: number | null
   setupRevision: number | null
   fieldId: number | null
+  planId: number | null
   crop: string | null
   rowSpacingIn: number | null
   theoreticalIn: number | null

@@ -1,5 +1,6 @@
 import { and, asc, eq, inArray } from 'drizzle-orm'
 import * as schema from '../../server/db/schema'
+import { seedingRateForStand } from '../../shared/utils/meter'
 import { parseSpacingCsv, spacingHistogram, spacingQuality, standCountSummary, cornYieldLossFromSpacingSd } from '../../shared/utils/field-checks'
 import { seedDropSummary } from '../../shared/utils/seed-drop'
 import { solveDrive } from '../../shared/utils/solver'
@@ -23,22 +24,29 @@ export async function seedChecks(db: SeedDb, a: Accounts) {
   const stages = await db.select().from(schema.driveStages).where(eq(schema.driveStages.sectionId, section.sectionId!)).orderBy(asc(schema.driveStages.position))
   const plates = await db.select().from(schema.seedPlates).where(and(eq(schema.seedPlates.farmId, farmId), inArray(schema.seedPlates.code, ['CF-C30', 'CF-C24', 'CF-C16'])))
   const lengthFt = 17.424
-  const link = { farmId, setupId: setup.id, setupRevision: rev!.revision, fieldId: field?.id ?? null, authorId: a.operator.id }
+  // The season's plan on this field, when the plans were seeded: its targets apply, as on the server.
+  const [plan] = field ? await db.select({ plan: schema.cropPlans, germinationPercent: schema.seedLots.germinationPercent }).from(schema.cropPlans)
+    .leftJoin(schema.seedLots, eq(schema.seedLots.id, schema.cropPlans.seedLotId))
+    .where(and(eq(schema.cropPlans.farmId, farmId), eq(schema.cropPlans.fieldId, field.id))).limit(1) : []
+  const target = plan ? seedingRateForStand({ targetStand: plan.plan.targetStand, germinationPercent: plan.germinationPercent ?? 100, survivalPercent: plan.plan.survivalPercent }).seedsPerAcre : config.targetSeedsPerAcre
+  const targetStand = plan?.plan.targetStand ?? 32_000
+  const year = plan?.plan.season ?? 2026
+  const link = { farmId, setupId: setup.id, setupRevision: rev!.revision, fieldId: field?.id ?? null, planId: plan?.plan.id ?? null, authorId: a.operator.id }
 
   const dig = { rows: [{ row: 1, seedsCounted: 33 }, { row: 6, seedsCounted: 32 }, { row: 12, seedsCounted: 34 }], lengthFt }
-  const s = seedDropSummary({ ...dig, rowSpacingIn: config.rowSpacingIn, wheelCircumferenceIn: config.wheelCircumferenceIn, setupSeedsPerAcre: computed.seedsPerAcre, setupSlipPercent: config.slipPercent, targetSeedsPerAcre: config.targetSeedsPerAcre, planterSlipPercent: planter!.slipPercent })
+  const s = seedDropSummary({ ...dig, rowSpacingIn: config.rowSpacingIn, wheelCircumferenceIn: config.wheelCircumferenceIn, setupSeedsPerAcre: computed.seedsPerAcre, setupSlipPercent: config.slipPercent, targetSeedsPerAcre: target, planterSlipPercent: planter!.slipPercent })
   const choices = solveDrive({
     targetSeedsPerAcre: s.solverTargetSeedsPerAcre, rowSpacingIn: config.rowSpacingIn, wheelCircumferenceIn: planter!.wheelCircumferenceIn, slipPercent: planter!.slipPercent, meterRatio: planter!.meterRatio,
     stages: stages.map((st) => ({ position: st.position, driverTeeth: st.driverTeeth, drivenTeeth: st.drivenTeeth, driverOptions: st.driverOptions, drivenOptions: st.drivenOptions })),
     plates: plates.map((p) => ({ id: p.id, code: p.code, cellsPerPlate: p.cellsPerPlate })), installedPlateId: section.seedPlateId, limit: 3,
   })
   const { solverTargetSeedsPerAcre, ...summary } = s
-  const seedDrop: SeedDropResults = { ...summary, rowSpacingIn: config.rowSpacingIn, setupSeedsPerAcre: computed.seedsPerAcre, targetSeedsPerAcre: config.targetSeedsPerAcre, targetFrom: 'setup', setupSlipPercent: config.slipPercent, fix: { solverTargetSeedsPerAcre, choices, message: null } }
+  const seedDrop: SeedDropResults = { ...summary, rowSpacingIn: config.rowSpacingIn, setupSeedsPerAcre: computed.seedsPerAcre, targetSeedsPerAcre: target, targetFrom: plan ? 'plan' : 'setup', setupSlipPercent: config.slipPercent, fix: { solverTargetSeedsPerAcre, choices, message: null } }
 
   const counts = [31, 33, 30, 32, 29, 32]
   const stand = standCountSummary({ counts, lengthFt, rowSpacingIn: config.rowSpacingIn })
   const standResults: StandCountResults = {
-    ...stand, lengthFt, rowSpacingIn: config.rowSpacingIn, targetStand: 32_000, targetFrom: 'entered', errorVsTargetPercent: (stand.meanPerAcre / 32_000 - 1) * 100,
+    ...stand, lengthFt, rowSpacingIn: config.rowSpacingIn, targetStand, targetFrom: plan ? 'plan' : 'entered', errorVsTargetPercent: (stand.meanPerAcre / targetStand - 1) * 100,
     seedsDroppedPerAcre: s.seedsPerAcre, seedsDroppedFrom: 'the seed-drop check on this revision', survivalPercent: stand.meanPerAcre / s.seedsPerAcre * 100,
   }
 
@@ -50,9 +58,9 @@ export async function seedChecks(db: SeedDb, a: Accounts) {
   const spacing: SpacingResults = { ...q, theoreticalIn, histogram: spacingHistogram({ spacingsIn, theoreticalIn }), cornYieldLossBuPerAcre: cornYieldLossFromSpacingSd({ spacingSdIn: q.sdIn }).buPerAcre }
 
   await db.insert(schema.fieldChecks).values([
-    { ...link, kind: 'seed-drop', rows: [1, 6, 12], checkedOn: '2026-05-04', inputs: { kind: 'seed-drop', ...dig }, results: seedDrop, note: 'Dug behind the planter on the first pass.',
-      reviewStatus: 'correction-needed', reviewComment: 'About 3 % light. Check the drive tire pressure before changing sprockets.', reviewedBy: a.agronomist.id, reviewedAt: new Date('2026-05-04T18:00:00Z') },
-    { ...link, kind: 'stand-count', rows: [1, 6, 12], checkedOn: '2026-05-21', inputs: { kind: 'stand-count', counts, lengthFt }, results: standResults, note: 'Six counts across the field after emergence.' },
-    { ...link, kind: 'spacing', rows: [6], checkedOn: '2026-05-21', inputs: { kind: 'spacing', row: 6, spacingsIn, theoreticalIn }, results: spacing },
+    { ...link, kind: 'seed-drop', rows: [1, 6, 12], checkedOn: `${year}-04-22`, inputs: { kind: 'seed-drop', ...dig }, results: seedDrop, note: 'Dug behind the planter on the first pass.',
+      reviewStatus: 'correction-needed', reviewComment: 'Light against the plan. Check the drive tire pressure, then take the solver\'s first choice.', reviewedBy: a.agronomist.id, reviewedAt: new Date(`${year}-04-22T18:00:00Z`) },
+    { ...link, kind: 'stand-count', rows: [1, 6, 12], checkedOn: `${year}-05-12`, inputs: { kind: 'stand-count', counts, lengthFt }, results: standResults, note: 'Six counts across the field after emergence.' },
+    { ...link, kind: 'spacing', rows: [6], checkedOn: `${year}-05-12`, inputs: { kind: 'spacing', row: 6, spacingsIn, theoreticalIn }, results: spacing },
   ])
 }
