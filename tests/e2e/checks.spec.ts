@@ -61,3 +61,21 @@ test('an operator reads a spacing CSV with junk lines and sees them by line numb
   await expect(report).toContainText('Line 5: A spacing must be more than 0')
   await expect(page.getByRole('button', { name: 'Save spacing run' })).toBeDisabled()
 })
+
+test('the agronomist reviews a stand count from the plan\'s page and weighs a replant', async ({ page }) => {
+  await signIn(page, 'agronomist')
+  await page.goto('/plans?season=2027')
+  await page.getByRole('link', { name: /Schoolhouse 80/ }).first().click()
+  const linked = page.getByTestId('linked-checks')
+  await expect(linked.getByRole('listitem')).toHaveCount(3)
+  await linked.getByRole('link', { name: 'Stand count · revision 3' }).click()
+  // Six demo counts over 1/1000 acre: 31, 33, 30, 32, 29, 32 thousand → mean 31,167 (computed).
+  await expect(page.getByTestId('stand-result')).toContainText('31,167 /ac')
+  await expect(page.getByLabel('Stand found')).toHaveValue('31167')
+  await expect(page.getByTestId('replant-advice')).toContainText('The agronomist decides')
+  await page.getByLabel('Decision').selectOption({ label: 'Replant considered' })
+  await page.getByLabel('Comment').fill('Even stand; keep it.')
+  await page.getByRole('button', { name: 'Save review' }).click()
+  await expect(page.getByTestId('review-status')).toContainText('Replant considered')
+  await expect(page.getByTestId('review-status')).toContainText('Priya Okafor')
+})
