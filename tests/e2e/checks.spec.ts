@@ -79,3 +79,22 @@ test('the agronomist reviews a stand count from the plan\'s page and weighs a re
   await expect(page.getByTestId('review-status')).toContainText('Replant considered')
   await expect(page.getByTestId('review-status')).toContainText('Priya Okafor')
 })
+
+test('an operator saves a seed-drop check and reads the slip it implies and the corrected choice', async ({ page }) => {
+  await signIn(page, 'operator')
+  await page.goto('/checks')
+  await page.getByLabel('Setup on the planter').selectOption({ label: 'North 12 · corn 34k · river bottoms (North 12)' })
+  await page.getByRole('tab', { name: 'Seed drop' }).tap()
+  await expect(page.getByLabel('Working safely during a seed check')).toContainText('Treated seed carries pesticide')
+  await expect(page.getByLabel('Length of row')).toHaveValue('17.424')
+  await page.getByLabel('Seeds (entry 1)').fill('33')
+  // 33 seeds over 1/1000 acre → 33,000 seeds/acre against the setup's 34,033 → −3.0 % (computed).
+  await expect(page.getByTestId('seed-drop-preview')).toContainText('33,000 /ac')
+  await expect(page.getByTestId('seed-drop-preview')).toContainText('-3.0 %')
+  await page.getByRole('button', { name: 'Save seed-drop check' }).tap()
+  await expect(page.getByRole('heading', { name: /Seed-drop check/ })).toBeVisible()
+  // (1 − 33,000 ÷ (34,033 ÷ 0.97)) × 100 = 5.95 % (meter formula, computed).
+  await expect(page.getByTestId('implied-slip')).toHaveText('5.95 %')
+  await expect(page.getByTestId('fix-choices').getByRole('listitem').first()).toBeVisible()
+  await expect(page.getByTestId('seed-drop-result')).toContainText('The owner or the shop foreman can store this slip')
+})
