@@ -55,12 +55,12 @@ export async function buildSheet(farmId: number, setupId: number, revision?: num
 }
 
 let fontsReady: Promise<void> | undefined
-type PdfMake = typeof import('pdfmake')
+type PdfMake = typeof import('pdfmake').default
 
 // Inter from @fontsource (copied to server/assets/fonts) goes into pdfmake's virtual file system
 // once; the renderer may then read nothing from disk or the network.
 async function usePdfMake(): Promise<PdfMake> {
-  const pdfmake = (await import('pdfmake')).default as unknown as PdfMake
+  const pdfmake: PdfMake = (await import('pdfmake')).default
   fontsReady ??= (async () => {
     const store = useStorage('assets:server')
     for (const w of ['400', '600']) {
@@ -79,7 +79,7 @@ async function usePdfMake(): Promise<PdfMake> {
 export async function sheetPdf(sheet: SetupSheet): Promise<Buffer> {
   const pdfmake = await usePdfMake()
   const doc = sheetDocument(sheet)
-  return pdfmake.createPdf(doc as never).getBuffer() as Promise<Buffer>
+  return pdfmake.createPdf(doc).getBuffer()
 }
 
 export function sheetFileName(sheet: SetupSheet) {
