@@ -1,4 +1,4 @@
-import type { SetupSheet } from './sheets'
+import type { SetupSheet } from '#shared/types/shop'
 
 const TEAL = '#0f766e'
 const GRAPHITE = '#25282d'

@@ -1,5 +1,6 @@
 import { and, eq } from 'drizzle-orm'
 import QRCode from 'qrcode'
+import type { SetupSheet } from '#shared/types/shop'
 import type { Member } from '../utils/membership'
 import { getRevision } from './setups'
 import { planterPickList } from './installs'
@@ -7,10 +8,9 @@ import { sheetDocument } from './sheet-document'
 
 const { cropPlans, fields, seedPlates, farms, memberships, users } = schema
 
-export type SetupSheet = Awaited<ReturnType<typeof buildSheet>>
 
 // Everything a setup sheet shows, assembled once for the PDF, the print page and the e-mail.
-export async function buildSheet(farmId: number, setupId: number, revision?: number) {
+export async function buildSheet(farmId: number, setupId: number, revision?: number): Promise<SetupSheet> {
   const db = useDb()
   const { setup, rev, planterName } = await getRevision(farmId, setupId, revision)
   const [farm] = await db.select({ name: farms.name }).from(farms).where(eq(farms.id, farmId))
