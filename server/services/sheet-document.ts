@@ -4,7 +4,8 @@ const TEAL = '#0f766e'
 const GRAPHITE = '#25282d'
 const MUTED = '#5b6270'
 
-// pdfmake document for a setup sheet: US Letter landscape, Inter, real text throughout.
+// pdfmake document for a setup sheet: US Letter landscape, Inter, real text throughout. The latin
+// subset of Inter has no arrows, so the PDF says "to" where the page shows one.
 export function sheetDocument(s: SetupSheet) {
   const f = s.figures
   const fieldsLine = s.fields.length ? s.fields.map((x) => `${x.name} (${fmtNum(x.acres, 1)} ac)`).join(', ') : 'no field planned with this setup yet'
@@ -33,9 +34,9 @@ export function sheetDocument(s: SetupSheet) {
   }
   const pl = s.pickList
   const pickLines = [
-    ...[...pl.plates, ...pl.sprockets].map((l) => `${l.kind === 'plate' ? 'Plate' : 'Sprocket'} ${l.label}: pull ${l.pull}, put back ${l.putBack} · on the shelf ${l.onHand} → ${l.after}${l.short ? ` · SHORT ${l.short}` : ''}`),
-    ...pl.parts.map((p) => `${p.part}: ${p.from} → ${p.to} on rows ${p.rows.join(', ')}`),
-    ...pl.adjustments.map((p) => `Set ${p.part.toLowerCase()}: ${p.from} → ${p.to} on rows ${p.rows.join(', ')}`),
+    ...[...pl.plates, ...pl.sprockets].map((l) => `${l.kind === 'plate' ? 'Plate' : 'Sprocket'} ${l.label}: pull ${l.pull}, put back ${l.putBack} · on the shelf ${l.onHand}, then ${l.after}${l.short ? ` · SHORT ${l.short}` : ''}`),
+    ...pl.parts.map((p) => `${p.part}: ${p.from} to ${p.to} on rows ${p.rows.join(', ')}`),
+    ...pl.adjustments.map((p) => `Set ${p.part.toLowerCase()}: ${p.from} to ${p.to} on rows ${p.rows.join(', ')}`),
     ...pl.blockers,
   ]
   const signLine = (label: string) => ({ stack: [{ canvas: [{ type: 'line', x1: 0, y1: 18, x2: 200, y2: 18, lineWidth: 0.6, lineColor: GRAPHITE }] }, { text: label, fontSize: 8, color: MUTED, margin: [0, 2, 0, 0] }] })
@@ -50,7 +51,7 @@ export function sheetDocument(s: SetupSheet) {
       {
         columns: [
           { width: '*', stack: [
-            { text: 'SETUP SHEET', fontSize: 8, color: TEAL, bold: true, characterSpacing: 1 },
+            { text: 'SETUP SHEET', fontSize: 8, color: TEAL, bold: true },
             { text: s.setup.name, fontSize: 18, bold: true },
             { text: `Revision ${s.revision.revision} of ${s.revision.latestRevision} · saved ${fmtDate(s.revision.savedAt)}`, color: MUTED },
             ...(s.revision.note ? [{ text: `“${s.revision.note}”`, italics: true, color: MUTED }] : []),
