@@ -20,14 +20,16 @@ export function sheetDocument(s: SetupSheet) {
     ['1/1000-acre check length', `${fmtNum(f.checkLengthFt, 1)} ft of row`],
     ['Drive wheel', `${f.wheelCircumferenceIn} in rolling circumference, ${f.slipPercent} % slip`],
   ]
-  const cell = (text: string, bold = false) => ({ text, bold, fontSize: 8 })
+  // Codes and gear pairs stay on one line so the printed table (and its text) keeps them whole.
+  const NO_WRAP = new Set(['row', 'plate', 'sprockets', 'downPressure', 'pressWheel'])
+  const cell = (text: string, key: string) => ({ text, bold: key === 'row', fontSize: 8, noWrap: NO_WRAP.has(key) })
   const rowTable = {
     table: {
       headerRows: 1,
-      widths: ['auto', 'auto', '*', 'auto', 'auto', 'auto', 'auto', 'auto', '*', 'auto'],
+      widths: ['auto', 'auto', 'auto', 'auto', 'auto', 'auto', '*', 'auto', '*', '*'],
       body: [
         SHEET_COLUMNS.map((c) => ({ text: c.label, bold: true, fontSize: 8, color: 'white', fillColor: GRAPHITE })),
-        ...s.rows.map((r) => SHEET_COLUMNS.map((c) => cell(String(r[c.key]), c.key === 'row'))),
+        ...s.rows.map((r) => SHEET_COLUMNS.map((c) => cell(String(r[c.key]), c.key))),
       ],
     },
     layout: { hLineColor: '#d4d7dd', vLineColor: '#d4d7dd', fillColor: (i: number) => (i > 0 && i % 2 === 0 ? '#f3f4f6' : null) },
