@@ -21,12 +21,12 @@ export function sheetDocument(s: SetupSheet) {
     ['Drive wheel', `${f.wheelCircumferenceIn} in rolling circumference, ${f.slipPercent} % slip`],
   ]
   // Codes and gear pairs stay on one line so the printed table (and its text) keeps them whole.
-  const NO_WRAP = new Set(['row', 'plate', 'sprockets', 'downPressure', 'pressWheel'])
+  const NO_WRAP = new Set(['row', 'plate', 'sprockets', 'downPressure', 'pressWheel', 'granular'])
   const cell = (text: string, key: string) => ({ text, bold: key === 'row', fontSize: 8, noWrap: NO_WRAP.has(key) })
   const rowTable = {
     table: {
       headerRows: 1,
-      widths: ['auto', 'auto', 'auto', 'auto', 'auto', 'auto', '*', 'auto', '*', '*'],
+      widths: ['auto', 'auto', 'auto', 'auto', 'auto', 'auto', '*', 'auto', 'auto', '*'],
       body: [
         SHEET_COLUMNS.map((c) => ({ text: c.label, bold: true, fontSize: 8, color: 'white', fillColor: GRAPHITE })),
         ...s.rows.map((r) => SHEET_COLUMNS.map((c) => cell(String(r[c.key]), c.key))),
