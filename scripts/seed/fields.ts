@@ -14,12 +14,12 @@ const ring = (pts: [number, number][]): Position[] => {
 // Quarter-mile by half-mile: about 80 acres at this latitude.
 const SCHOOLHOUSE = { type: 'Polygon' as const, coordinates: [ring([[0, 0], [0.00956, 0], [0.00956, 0.00362], [0, 0.00362]])] }
 // An L along the draw, with the wet corner cut out.
-const WILLOW = { type: 'Polygon' as const, coordinates: [ring([[0.012, 0], [0.024, 0], [0.024, 0.0036], [0.018, 0.0036], [0.018, 0.0072], [0.012, 0.0072]])] }
+const WILLOW = { type: 'Polygon' as const, coordinates: [ring([[0.012, 0], [0.020, 0], [0.020, 0.0036], [0.016, 0.0036], [0.016, 0.0072], [0.012, 0.0072]])] }
 // A quarter section with the farmstead left out as a hole.
 const HOME = {
   type: 'Polygon' as const,
   coordinates: [
-    ring([[0, 0.008], [0.0191, 0.008], [0.0191, 0.01524], [0, 0.01524]]),
+    ring([[0, 0.008], [0.00956, 0.008], [0.00956, 0.01524], [0, 0.01524]]),
     ring([[0.0005, 0.0145], [0.0025, 0.0145], [0.0025, 0.0152], [0.0005, 0.0152]]),
   ],
 }

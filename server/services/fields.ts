@@ -1,7 +1,8 @@
 import { and, asc, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm'
 import type { z } from 'zod'
-import type { fieldBody, fieldListQuery, fieldPatch, seedLotBody, seedLotListQuery, seedLotPatch } from '#shared/schemas/fields'
+import type { fieldBody, fieldImportBody, fieldListQuery, fieldPatch, seedLotBody, seedLotListQuery, seedLotPatch } from '#shared/schemas/fields'
 import { boundaryOutlinePath, checkBoundary } from '#shared/utils/boundary'
+import { parseFieldCsv } from '#shared/utils/field-import'
 import { seedLotUnit } from '#shared/utils/seed-lots'
 import type { Member } from '../utils/membership'
 import type { Tx } from '../utils/db'
@@ -182,5 +183,29 @@ export async function deleteSeedLot(member: Member, id: number) {
     await tx.delete(seedLots).where(eq(seedLots.id, id))
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'delete', entity: 'seed_lot', entityId: id, before })
     return { deleted: id }
+  })
+}
+
+// One transaction: names on the farm are read in it, and the import is one audit entry.
+export async function importFields(member: Member, body: z.infer<typeof fieldImportBody>) {
+  return useDb().transaction(async (tx) => {
+    const existing = await tx.select({ name: fields.name }).from(fields).where(eq(fields.farmId, member.farmId))
+    const parsed = parseFieldCsv(body.csv, existing.map((e) => e.name))
+    const report = { mode: body.mode, dataRows: parsed.dataRows, valid: parsed.rows.length, errors: parsed.errors }
+    if (body.mode === 'check') return { ...report, imported: 0, items: [] }
+    if (parsed.errors.length && (body.mode === 'all-or-nothing' || !parsed.rows.length)) {
+      const n = parsed.errors.length
+      const message = parsed.rows.length
+        ? `${n} ${n === 1 ? 'line needs' : 'lines need'} attention; nothing was imported`
+        : `No line can be imported; ${n} ${n === 1 ? 'line needs' : 'lines need'} attention`
+      throw createError({ statusCode: 400, statusMessage: 'Bad Request', message, data: { fields: { csv: message }, errors: parsed.errors, valid: parsed.rows.length, dataRows: parsed.dataRows } })
+    }
+    if (!parsed.rows.length) badRequest('The file has no fields to import', { csv: 'Add at least one line below the header' })
+    const created = await tx.insert(fields).values(parsed.rows.map((r) => ({ ...r.field, farmId: member.farmId }))).returning()
+    await writeAudit(tx, {
+      farmId: member.farmId, userId: member.user.id, action: 'import', entity: 'field',
+      after: { mode: body.mode, created: created.map((c) => ({ id: c.id, name: c.name, acres: c.acres })), skippedLines: parsed.errors.map((e) => e.line) },
+    })
+    return { ...report, imported: created.length, items: created.map((c, i) => ({ id: c.id, name: c.name, line: parsed.rows[i]!.line })) }
   })
 }

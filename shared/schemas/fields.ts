@@ -1,7 +1,10 @@
 import { z } from 'zod'
 import { CROPS } from './equipment'
 import { shortText } from './common'
+import type { Role } from '../types/roles'
 
+// Who edits fields and seed lots; every member reads them.
+export const FIELD_EDITORS: Role[] = ['owner', 'agronomist']
 export const TILLAGE = ['conventional', 'minimum', 'no-till'] as const
 export const DRAINAGE = ['well', 'moderate', 'poor', 'tiled'] as const
 export const SEED_UNIT_KINDS = ['seeds', 'lb'] as const
@@ -72,8 +75,6 @@ export const seedLotBody = z.strictObject({
   unitKind: lotFields.unitKind.default('seeds'),
 })
 export const seedLotPatch = z.strictObject(lotFields).partial()
-// What a foreman may change: the count on the shelf.
-export const seedLotStockPatch = z.strictObject({ unitsOnHand: lotFields.unitsOnHand })
 
 export const seedLotListQuery = z.object({
   q: z.string().trim().max(80, 'Use at most 80 characters').optional(),
