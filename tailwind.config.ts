@@ -25,6 +25,7 @@ export default {
       },
       fontFamily: { sans: ['Inter', 'system-ui', 'sans-serif'] },
       minHeight: { touch: '2.75rem' },
+      minWidth: { touch: '2.75rem' },
     },
   },
   plugins: [],

@@ -6,7 +6,7 @@ test('the foreman picks two row units on the toolbar and sets their depth at onc
   await expect(page.getByTestId('setups-panel')).toContainText('Creek 15 · soybeans 140k · 15 in')
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Equipment' }).click()
   await expect(page).toHaveURL(/\/planters$/)
-  await page.getByRole('link', { name: /^North 12 folding/ }).click()
+  await page.getByRole('link', { name: /^North 12 Folding/ }).click()
   await expect(page.getByRole('heading', { name: 'North 12' })).toBeVisible()
   const row = (n: number) => page.locator(`[data-row-unit="${n}"]`)
   await row(4).click()
