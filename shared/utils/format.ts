@@ -17,3 +17,15 @@ export function fmtDate(d: string | Date | null | undefined): string {
   if (!d) return '—'
   return new Date(d).toLocaleString('en-US', { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' })
 }
+
+// A calendar day ('2027-05-12' or a timestamp) as 'May 12, 2027'; a bare day is read as that day, not as UTC midnight.
+export function fmtDay(d: string | Date | null | undefined): string {
+  if (!d) return '—'
+  const day = typeof d === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(d) ? new Date(`${d}T12:00:00`) : new Date(d)
+  return Number.isNaN(day.getTime()) ? String(d) : day.toLocaleDateString('en-US', { year: 'numeric', month: 'short', day: 'numeric' })
+}
+
+// A stored lower-case word ('pull-type', 'no-till') as a label: first letter capitalised.
+export function fmtLabel(s: string | null | undefined): string {
+  return s ? s.charAt(0).toUpperCase() + s.slice(1) : '—'
+}
