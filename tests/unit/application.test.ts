@@ -147,3 +147,37 @@ describe('liquid', () => {
     expect(acresPerTank({ tankGal: 300, gpa: 15 }).acres).toBe(20)
   })
 })
+
+describe('round trips and the 653 ft rule (properties)', () => {
+  const width = fc.double({ min: 5, max: 60, noNaN: true })
+  const lb = fc.double({ min: 0.1, max: 400, noNaN: true })
+
+  it('the 653 ft rule (University of Missouri Extension G1273) stays within 0.1 % of the exact course area for any row width', () => {
+    fc.assert(fc.property(width, lb, (rowWidthIn, lbPerAcre) => {
+      const { ounces } = catchCourse653({ lbPerAcre, rowWidthIn })
+      expect(Math.abs(dryRateFromCatch({ ounces, lengthFt: 653, widthIn: rowWidthIn }).lbPerAcre / lbPerAcre - 1)).toBeLessThan(0.001)
+    }))
+  })
+
+  it('a catch over the 1/128 acre course of any width reads oz × 8 lb/acre (University of Georgia Extension, Sumner)', () => {
+    fc.assert(fc.property(width, fc.double({ min: 0.1, max: 100, noNaN: true }), (widthIn, ounces) => {
+      const { lengthFt } = courseLengthForFraction({ widthIn, fractionOfAcre: 1 / 128 })
+      expect(dryRateFromCatch({ ounces, lengthFt, widthIn }).lbPerAcre / (ounces * 8)).toBeCloseTo(1, 10)
+    }))
+  })
+
+  it('GPM → GPA → GPM returns the start, and a solution heavier than water always calibrates at a higher water rate (EDIS WG013; UNL CropWatch 2016)', () => {
+    fc.assert(fc.property(fc.double({ min: 0.01, max: 5, noNaN: true }), fc.double({ min: 1, max: 15, noNaN: true }), width, fc.double({ min: 1, max: 2, noNaN: true }), (gpm, mph, widthIn, sg) => {
+      const l = computeLiquid({ gpm, mph, widthIn, specificGravity: sg })
+      expect(gpmForGpa({ gpa: l.gpa, mph, widthIn }).gpm / gpm).toBeCloseTo(1, 10)
+      expect(l.waterEquivalentGpa).toBeGreaterThanOrEqual(l.gpa)
+    }))
+  })
+
+  it('acres per tank × GPA gives back the tank, and a timed catch scales with time (computed)', () => {
+    fc.assert(fc.property(fc.double({ min: 1, max: 2000, noNaN: true }), fc.double({ min: 0.5, max: 100, noNaN: true }), (tankGal, gpa) => {
+      expect(acresPerTank({ tankGal, gpa }).acres * gpa / tankGal).toBeCloseTo(1, 10)
+      expect(gpmFromTimedCatch({ ounces: 2 * tankGal, seconds: 120 }).gpm).toBeCloseTo(gpmFromTimedCatch({ ounces: tankGal, seconds: 60 }).gpm, 10)
+    }))
+  })
+})
