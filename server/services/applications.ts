@@ -101,7 +101,8 @@ function recordOut(r: { record: typeof applicationRecords.$inferSelect, recorded
     correctedById: r.correctedById,
     current: r.correctedById === null,
     recordedAfterDays,
-    recordedLate: r.record.restrictedUse && recordedAfterDays > RECORD_WITHIN_DAYS,
+    // A correction carries no lateness of its own: the original shows when the application was first recorded.
+    recordedLate: r.record.restrictedUse && !r.record.correctsId && recordedAfterDays > RECORD_WITHIN_DAYS,
     // The federal rule asks restricted-use records be kept 2 years; Rowbench never deletes them.
     keepUntil: r.record.restrictedUse ? keep.toISOString().slice(0, 10) : null,
   }

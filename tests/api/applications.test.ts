@@ -206,6 +206,8 @@ describe('application records', () => {
     expect(fix.status).toBe(201)
     expect(fix.data).toMatchObject({ correctsId: id, correctionReason: 'Total was 78 lb, not 87', totalAmount: 78, current: true })
     expect(fix.data.history.map((h: { id: number, totalAmount: number, correctedById: number }) => [h.id, h.totalAmount, h.correctedById])).toEqual([[id, 87, fix.data.id]])
+    // Recorded months after 2 May: the original is flagged late, the correction is not judged on its own date.
+    expect([fix.data.history[0].recordedLate, fix.data.recordedLate]).toEqual([true, false])
     expect((await sql('select * from application_records where id = $1', [id]))[0]).toEqual(orig)
     const again = await operator.post(`/api/application-records/${id}/corrections`, { reason: 'again', record: recordBody() })
     expect(again.status).toBe(409)

@@ -1,7 +1,7 @@
 import { expect, test } from '@playwright/test'
-import { signIn } from './helpers'
+import { signIn, signOut } from './helpers'
 
-test('an operator runs a catch test at three settings and saves the dial setting onto the setup', async ({ page }) => {
+test('an operator runs a catch test at three settings and saves the dial setting onto the setup', async ({ page }, info) => {
   await signIn(page, 'operator')
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Applications', exact: true }).click()
   await page.getByRole('navigation', { name: 'Applications' }).getByRole('link', { name: 'Catch test' }).click()
@@ -11,29 +11,34 @@ test('an operator runs a catch test at three settings and saves the dial setting
   await page.getByLabel('Product', { exact: true }).fill('Rowguard 15G')
   await page.getByLabel('Rows caught', { exact: true }).fill('1, 7')
   await page.getByLabel('Course length', { exact: true }).fill('250')
-  await page.getByLabel('Target rate', { exact: true }).fill('8.7')
+  await page.getByLabel('Target rate', { exact: true }).fill('9.6')
   const catches = [[14, 1.5], [18, 2], [22, 2.5]]
   for (const [i, [setting, oz]] of catches.entries()) {
     await page.getByLabel(`Setting ${i + 1}`, { exact: true }).fill(String(setting))
     await page.getByLabel(`Weight caught ${i + 1}`, { exact: true }).fill(String(oz))
   }
-  // 250 ft at 30 in: each ounce is 4.356 lb/acre, so the line is 0.5445 × setting − 1.089 and 8.7 lb/acre sits at 17.98 (computed).
-  await expect(page.getByTestId('setting-for-target')).toHaveText('18.0')
+  // 250 ft at 30 in: each ounce is 4.356 lb/acre, so the line is 0.5445 × setting − 1.089 and 9.6 lb/acre sits at 19.63 (computed).
+  await expect(page.getByTestId('setting-for-target')).toHaveText('19.6')
   await expect(page.getByTestId('catch-r2')).toHaveText('1.000')
   await expect(page.getByTestId('catch-out-of-range')).toHaveCount(0)
-  await expect(page.getByLabel('Dial setting to use', { exact: true })).toHaveValue('18')
+  await expect(page.getByLabel('Dial setting to use', { exact: true })).toHaveValue('19.6')
+  await page.screenshot({ path: info.outputPath('catch-test.png'), fullPage: true })
   await page.getByRole('button', { name: 'Save onto the setup' }).click()
   await expect(page.getByTestId('catch-saved')).toContainText('the dial setting is now revision 4')
   await page.getByTestId('catch-saved').getByRole('link', { name: 'Open the setup' }).click()
   await expect(page.getByRole('heading', { name: 'North 12 · corn 34k · river bottoms' })).toBeVisible()
   await expect(page.getByTestId('history').getByRole('listitem')).toHaveCount(4)
   const runs = page.getByTestId('setup-calibrations').getByRole('listitem')
-  await expect(runs.first()).toContainText('Rowguard 15G · target 8.70 lb/ac · dial 18')
+  await expect(runs.first()).toContainText('Rowguard 15G · target 9.60 lb/ac · dial 19.6')
   await expect(runs.first()).toContainText('Caught on revision 3, rows 1, 7, 250 ft course, 3 catches, r² 1.000')
   await expect(runs.first()).toContainText('set in revision 4')
+  // The granular rows (1, 3, 5 … 11) went from 18 to 19.6 in revision 4.
+  await expect(page.getByTestId('diff')).toContainText('granular dial')
+  await expect(page.getByTestId('diff')).toContainText('19.6')
+  await page.screenshot({ path: info.outputPath('setup.png'), fullPage: true })
 })
 
-test('an operator records a restricted-use application, is told what the federal rule needs, and corrects it; the foreman only reads', async ({ page }) => {
+test('an operator records a restricted-use application, is told what the federal rule needs, and corrects it; the foreman only reads', async ({ page }, info) => {
   await signIn(page, 'operator')
   await page.goto('/applications?season=2026')
   await expect(page.getByText('7 CFR Part 110')).toBeVisible()
@@ -63,4 +68,17 @@ test('an operator records a restricted-use application, is told what the federal
   await expect(page.getByRole('row').filter({ hasText: 'North Terrace 55' })).toHaveCount(2)
   await expect(page.getByRole('row').filter({ hasText: '481 lb' })).toContainText('corrects #')
   await expect(page.getByRole('row').filter({ hasText: '478.5 lb' })).toContainText('corrected by #')
+  await page.screenshot({ path: info.outputPath('records.png'), fullPage: true })
+  await signOut(page)
+  await signIn(page, 'foreman')
+  await page.goto('/applications?season=2026')
+  await expect(page.getByRole('row').filter({ hasText: 'North Terrace 55' })).toHaveCount(2)
+  await expect(page.getByRole('button', { name: 'New record' })).toHaveCount(0)
+  await expect(page.getByRole('button', { name: 'Correct' })).toHaveCount(0)
+  await expect(page.getByRole('link', { name: 'Export 2026 as CSV' })).toHaveAttribute('href', '/api/application-records/export.csv?season=2026')
+  await page.goto('/applications/rates')
+  await expect(page.getByTestId('chemical-cautions')).toBeVisible()
+  // 8.7 lb per field acre in 30 in rows = 7.99 oz per 1,000 ft (computed).
+  await expect(page.getByTestId('granular-out')).toContainText('7.99')
+  await page.screenshot({ path: info.outputPath('rates.png'), fullPage: true })
 })
