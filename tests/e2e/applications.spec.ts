@@ -36,6 +36,10 @@ test('an operator runs a catch test at three settings and saves the dial setting
   await expect(page.getByTestId('diff')).toContainText('granular dial')
   await expect(page.getByTestId('diff')).toContainText('19.6')
   await page.screenshot({ path: info.outputPath('setup.png'), fullPage: true })
+  // Opened straight from a link, the catch-test page renders on the server with the setup chosen.
+  const setupId = /\/setups\/(\d+)/.exec(page.url())![1]
+  await page.goto(`/applications/catch-test?setup=${setupId}`)
+  await expect(page.getByText('Revision 4 · 30 in rows')).toBeVisible()
 })
 
 test('an operator records a restricted-use application, is told what the federal rule needs, and corrects it; the foreman only reads', async ({ page }, info) => {
