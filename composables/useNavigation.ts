@@ -11,6 +11,8 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/setups', label: 'Setups', roles: ALL, hint: 'Saved setups, their history and discussion' },
   { to: '/planters', label: 'Equipment', roles: ALL, hint: 'Planters, row units and drive trains' },
   { to: '/inventory', label: 'Plates & sprockets', roles: ['owner', 'foreman', 'operator'], hint: 'What is on the shelf' },
+  { to: '/fields', label: 'Fields', roles: ALL, hint: 'Acres, soils, tillage and outlines' },
+  { to: '/seed-lots', label: 'Seed lots', roles: ALL, hint: 'Varieties, seed size, germination and units on hand' },
   { to: '/applications', label: 'Applications', roles: ALL, hint: 'Granular rates, catch tests and pesticide records' },
   { to: '/members', label: 'People', roles: ['owner'], hint: 'Invite members and set their roles' },
   { to: '/mailbox', label: 'Mailbox', roles: ['owner'], hint: 'Messages Rowbench sent (demo mailbox)' },

@@ -4,8 +4,8 @@ import { Scrypt } from '@adonisjs/hash/drivers/scrypt'
 import pg from 'pg'
 import { startTestServer } from '../lib/test-server.mjs'
 
-export async function benchServer(name, env = {}) {
-  return startTestServer({ database: `rowbench_bench_${name}`, port: 3190, smtpPort: 2590, env: { ROWBENCH_LOGIN_IP_LIMIT: '100000', ...env } })
+export async function benchServer(name, env = {}, nodeArgs = []) {
+  return startTestServer({ database: `rowbench_bench_${name}`, port: 3190, smtpPort: 2590, env: { ROWBENCH_LOGIN_IP_LIMIT: '100000', ...env }, nodeArgs })
 }
 
 export async function benchMember(databaseUrl, role = 'owner') {

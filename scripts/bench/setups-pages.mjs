@@ -45,8 +45,12 @@ try {
     { page: 'first', 'median ms': first.median, 'p95 ms': first.p95, rows: first.n },
     { page: `deep (after id ${deep})`, 'median ms': deepPage.median, 'p95 ms': deepPage.p95, rows: deepPage.n },
   ])
+  // The route's own statement (server/services/setups.ts listSetups), deep page.
   const { rows: plan } = await pool.query(
-    'explain select id from setups where farm_id = $1 and id < $2 order by id desc limit 50', [member.farmId, deep])
+    `explain select s.id, s.name, p.name, (r.results->>'seedsPerAcre')::float from setups s
+     inner join planters p on p.id = s.planter_id
+     inner join setup_revisions r on r.setup_id = s.id and r.revision = s.latest_revision
+     where s.farm_id = $1 and s.id < $2 order by s.id desc limit 51`, [member.farmId, deep])
   console.log('\nEXPLAIN of the page query:')
   for (const r of plan) console.log(`  ${r['QUERY PLAN']}`)
 } finally {

@@ -38,7 +38,7 @@ export function freePort(preferred) {
   })
 }
 
-export async function startTestServer({ database, port: wantPort, smtpPort: wantSmtp, seed = false, fresh = true, smtp = true, env: extra = {} }) {
+export async function startTestServer({ database, port: wantPort, smtpPort: wantSmtp, seed = false, fresh = true, smtp = true, env: extra = {}, nodeArgs = [] }) {
   const port = await freePort(wantPort)
   const smtpPort = await freePort(wantSmtp)
   dbUp()
@@ -54,7 +54,7 @@ export async function startTestServer({ database, port: wantPort, smtpPort: want
   const smtpServer = smtp ? await startFakeSmtp({ port: smtpPort, dir: mailbox }) : null
   const uploads = mkdtempSync(join(tmpdir(), 'rowbench-uploads-'))
   const baseUrl = `http://127.0.0.1:${port}`
-  const child = spawn(process.execPath, [resolve(root, '.output/server/index.mjs')], {
+  const child = spawn(process.execPath, [...nodeArgs, resolve(root, '.output/server/index.mjs')], {
     env: {
       ...process.env,
       DATABASE_URL: databaseUrl,

@@ -32,27 +32,27 @@ export async function seedApplications(db: SeedDb, a: Accounts) {
   const base = { farmId, crop: 'corn', applicatorName: 'Luis Brandt', recordedBy: a.operator.id, rowSpacingIn: 30 }
   const at = (d: string) => new Date(`${d}T20:00:00Z`)
   const [first] = await db.insert(schema.applicationRecords).values({
-    ...base, ...ROWGUARD, season: 2026, appliedOn: '2026-04-27', appliedTime: '08:15', fieldId: fieldId('River Bottom 80'), fieldName: 'River Bottom 80', location: 'Harlan Creek bottoms, east of the lane',
+    ...base, ...ROWGUARD, season: 2026, appliedOn: '2026-04-27', appliedTime: '08:15', fieldId: fieldId('Schoolhouse 80'), fieldName: 'Schoolhouse 80', location: 'North side of the schoolhouse road',
     restrictedUse: true, rate: 8.7, rateUnit: 'lb/acre', totalAmount: 690, totalUnit: 'lb', areaTreatedAcres: 80, bandWidthIn: 7, certificationNumber: 'PA-CF-0417',
     calibrationRunId: runId, weatherNotes: 'Sunny, 58 °F, wind SW 6 mph, soil moist', createdAt: at('2026-04-27'),
   }).returning()
   await db.insert(schema.applicationRecords).values({
-    ...base, ...ROWGUARD, season: 2026, appliedOn: '2026-04-27', appliedTime: '08:15', fieldId: fieldId('River Bottom 80'), fieldName: 'River Bottom 80', location: 'Harlan Creek bottoms, east of the lane',
+    ...base, ...ROWGUARD, season: 2026, appliedOn: '2026-04-27', appliedTime: '08:15', fieldId: fieldId('Schoolhouse 80'), fieldName: 'Schoolhouse 80', location: 'North side of the schoolhouse road',
     restrictedUse: true, rate: 8.7, rateUnit: 'lb/acre', totalAmount: 696, totalUnit: 'lb', areaTreatedAcres: 80, bandWidthIn: 7, certificationNumber: 'PA-CF-0417',
     calibrationRunId: runId, weatherNotes: 'Sunny, 58 °F, wind SW 6 mph, soil moist', correctsId: first!.id,
     correctionReason: 'Weighed the leftover in the boxes: 696 lb went on, not 690.', createdAt: at('2026-04-29'),
   })
   await db.insert(schema.applicationRecords).values([
     {
-      ...base, ...FURROWSHIELD, season: 2026, appliedOn: '2026-05-04', appliedTime: '13:40', fieldId: fieldId('Sandy Knob 40'), fieldName: 'Sandy Knob 40', restrictedUse: false,
-      rate: 6.5, rateUnit: 'oz/1000 ft', totalAmount: 282, totalUnit: 'lb', areaTreatedAcres: 40, bandWidthIn: 7, weatherNotes: 'Overcast, 64 °F, wind N 9 mph', createdAt: at('2026-05-04'),
+      ...base, ...FURROWSHIELD, season: 2026, appliedOn: '2026-05-04', appliedTime: '13:40', fieldId: fieldId('Sand Knob'), fieldName: 'Sand Knob', restrictedUse: false,
+      rate: 6.5, rateUnit: 'oz/1000 ft', totalAmount: 512, totalUnit: 'lb', areaTreatedAcres: 72.3, bandWidthIn: 7, weatherNotes: 'Overcast, 64 °F, wind N 9 mph', createdAt: at('2026-05-04'),
     },
     {
-      ...base, season: 2026, appliedOn: '2026-05-06', fieldId: fieldId('Creek Flat 62'), fieldName: 'Creek Flat 62', productName: 'Starter 10-34-0 (farm blend)', restrictedUse: false,
-      rate: 6, rateUnit: 'gal/acre', totalAmount: 372, totalUnit: 'gal', areaTreatedAcres: 62, notes: '2x2 placement, checked flow with a 60 s catch on rows 3 and 10', createdAt: at('2026-05-06'),
+      ...base, season: 2026, appliedOn: '2026-05-06', fieldId: fieldId('Creek Bottom North'), fieldName: 'Creek Bottom North', productName: 'Starter 10-34-0 (farm blend)', restrictedUse: false,
+      rate: 6, rateUnit: 'gal/acre', totalAmount: 387, totalUnit: 'gal', areaTreatedAcres: 64.5, notes: '2x2 placement, checked flow with a 60 s catch on rows 3 and 10', createdAt: at('2026-05-06'),
     },
     {
-      ...base, ...ROWGUARD, season: 2025, appliedOn: '2025-05-01', appliedTime: '09:00', fieldName: 'River Bottom 80', restrictedUse: true, rate: 8.7, rateUnit: 'lb/acre', totalAmount: 701,
+      ...base, ...ROWGUARD, season: 2025, appliedOn: '2025-05-01', appliedTime: '09:00', fieldId: fieldId('Schoolhouse 80'), fieldName: 'Schoolhouse 80', restrictedUse: true, rate: 8.7, rateUnit: 'lb/acre', totalAmount: 701,
       totalUnit: 'lb', areaTreatedAcres: 80, bandWidthIn: 7, certificationNumber: 'PA-CF-0417', weatherNotes: 'Clear, 61 °F, calm', createdAt: at('2025-05-02'),
     },
   ])

@@ -4,6 +4,7 @@ import pg from 'pg'
 import * as schema from '../../server/db/schema'
 import { seedAccounts } from './accounts'
 import { seedEquipment } from './equipment'
+import { seedFields } from './fields'
 import { seedApplications } from './applications'
 
 export type SeedDb = ReturnType<typeof drizzle<typeof schema>>
@@ -17,6 +18,7 @@ export async function seedDemo(url: string) {
     await db.transaction(async (tx) => {
       const accounts = await seedAccounts(tx as unknown as SeedDb)
       await seedEquipment(tx as unknown as SeedDb, accounts)
+      await seedFields(tx as unknown as SeedDb, accounts)
       await seedApplications(tx as unknown as SeedDb, accounts)
     })
     return true

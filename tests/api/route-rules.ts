@@ -1,5 +1,6 @@
 import type { Role } from '../../shared/types/roles'
 import { sql, type TestFarm } from './helpers'
+import { FIELDS_ROUTES } from './routes-fields'
 import { APPLICATIONS_ROUTES } from './routes-applications'
 
 export interface RouteRule {
@@ -97,5 +98,6 @@ export const ROUTES: Record<string, RouteRule> = {
   'PATCH /api/members/:id': { roles: ['owner'], fixture: (f) => membershipOf(f, 'foreman'), body: () => ({ role: 'foreman' }) },
   'DELETE /api/members/:id': { roles: ['owner'], fixture: extraMember },
   'GET /api/mailbox': { roles: ['owner'] },
+  ...FIELDS_ROUTES,
   ...APPLICATIONS_ROUTES,
 }

@@ -1,3 +1,4 @@
+import { sql } from 'drizzle-orm'
 import { pgTable, text, integer, numeric, pgEnum, index, uniqueIndex, timestamp, date, jsonb } from 'drizzle-orm/pg-core'
 import { id, timestamps } from './_columns'
 import { farms, users } from './accounts'
@@ -26,7 +27,8 @@ export const fields = pgTable('fields', {
   boundaryAcres: num(),
   ...timestamps,
 }, (t) => [
-  uniqueIndex('fields_farm_name_idx').on(t.farmId, t.name),
+  // Names are unique per farm whatever their case, as the service checks.
+  uniqueIndex('fields_farm_name_idx').on(t.farmId, sql`lower(${t.name})`),
   index('fields_farm_id_idx').on(t.farmId, t.id),
 ])
 
