@@ -13,6 +13,8 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/inventory', label: 'Plates & sprockets', roles: ['owner', 'foreman', 'operator'], hint: 'What is on the shelf' },
   { to: '/fields', label: 'Fields', roles: ALL, hint: 'Acres, soils, tillage and outlines' },
   { to: '/seed-lots', label: 'Seed lots', roles: ALL, hint: 'Varieties, seed size, germination and units on hand' },
+  { to: '/plans', label: 'Plans', roles: ALL, hint: 'Crop plans per field, their review and setups' },
+  { to: '/season', label: 'Season', roles: ALL, hint: 'Seed needs, planting days and the seed order' },
   { to: '/applications', label: 'Applications', roles: ALL, hint: 'Granular rates, catch tests and pesticide records' },
   { to: '/members', label: 'People', roles: ['owner'], hint: 'Invite members and set their roles' },
   { to: '/mailbox', label: 'Mailbox', roles: ['owner'], hint: 'Messages Rowbench sent (demo mailbox)' },

@@ -5,6 +5,7 @@ import * as schema from '../../server/db/schema'
 import { seedAccounts } from './accounts'
 import { seedEquipment } from './equipment'
 import { seedFields } from './fields'
+import { seedPlans } from './plans'
 import { seedApplications } from './applications'
 
 export type SeedDb = ReturnType<typeof drizzle<typeof schema>>
@@ -17,8 +18,9 @@ export async function seedDemo(url: string) {
     if (existing.length) return false
     await db.transaction(async (tx) => {
       const accounts = await seedAccounts(tx as unknown as SeedDb)
-      await seedEquipment(tx as unknown as SeedDb, accounts)
-      await seedFields(tx as unknown as SeedDb, accounts)
+      const equipment = await seedEquipment(tx as unknown as SeedDb, accounts)
+      const made = await seedFields(tx as unknown as SeedDb, accounts)
+      await seedPlans(tx as unknown as SeedDb, accounts, equipment, made)
       await seedApplications(tx as unknown as SeedDb, accounts)
     })
     return true

@@ -1,5 +1,5 @@
 // Maps low-level failures to answers a client can act on: the database being away is a 503 with a
-// retry hint (the pool reconnects by itself), a unique-key clash a 409.
+// retry hint (the pool reconnects by itself), a unique-key clash or a record still in use a 409.
 const UNAVAILABLE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006'])
 
 function rootCauses(error: unknown): Array<{ code?: string, message?: string }> {
@@ -18,6 +18,8 @@ export function classifyError(error: unknown) {
       return createError({ statusCode: 503, message: 'The database is briefly unavailable. Please retry in a few seconds.', data: { retryAfterSeconds: 3 } })
     }
     if (c.code === '23505') return createError({ statusCode: 409, message: 'That already exists' })
+    // A record still in use elsewhere (a foreign key with on delete restrict).
+    if (c.code === '23503') return createError({ statusCode: 409, message: 'Other records still use this one; remove or change them first' })
     if (c.code === '22003') return createError({ statusCode: 400, message: 'A number is out of range', data: { fields: {} } })
   }
   return undefined

@@ -1,6 +1,7 @@
 import type { Role } from '../../shared/types/roles'
 import { sql, type TestFarm } from './helpers'
 import { FIELDS_ROUTES } from './routes-fields'
+import { PLANS_ROUTES } from './routes-plans'
 import { APPLICATIONS_ROUTES } from './routes-applications'
 
 export interface RouteRule {
@@ -99,5 +100,6 @@ export const ROUTES: Record<string, RouteRule> = {
   'DELETE /api/members/:id': { roles: ['owner'], fixture: extraMember },
   'GET /api/mailbox': { roles: ['owner'] },
   ...FIELDS_ROUTES,
+  ...PLANS_ROUTES,
   ...APPLICATIONS_ROUTES,
 }

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { computeCapacity, daysToPlant, fillPlan, hopperCoverage, lbPerAcreFromSeeds, seedNeeds, seedsPerLbFromSample, seedUnitWeightLb } from '../../shared/utils/planning'
 
 describe('field capacity', () => {
-  it('C = S × W × E ÷ 8.25: 40 ft (16 rows × 30 in) at 6 mph and 70 % → 20.4 acres/h (Iowa State University Extension, PM 696)', () => {
+  it('C = S × W × E ÷ 8.25: 40 ft (16 rows × 30 in) at 6 mph and 70 % → 20.4 acres/h (Iowa State University Extension, Ag Decision Maker A3-24 / PM 696, "Estimating Farm Machinery Costs")', () => {
     const c = computeCapacity({ rows: 16, rowSpacingIn: 30, speedMph: 6, efficiencyPercent: 70 })
     expect(c.widthFt).toBe(40)
     expect(c.acresPerHour).toBeCloseTo(20.4, 1)
