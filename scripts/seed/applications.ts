@@ -1,6 +1,7 @@
 import { and, eq } from 'drizzle-orm'
 import * as schema from '../../server/db/schema'
 import { fitCatchTest } from '../../shared/utils/application'
+import { computeSetupResults } from '../../shared/utils/setup-results'
 import type { SeedDb } from './index'
 import type { seedAccounts } from './accounts'
 
@@ -16,12 +17,18 @@ export async function seedApplications(db: SeedDb, a: Accounts) {
   const [corn] = await db.select().from(schema.setups).where(and(eq(schema.setups.farmId, farmId), eq(schema.setups.name, 'North 12 · corn 34k · river bottoms')))
   let runId: number | null = null
   if (corn) {
-    const [rev] = await db.select().from(schema.setupRevisions).where(and(eq(schema.setupRevisions.setupId, corn.id), eq(schema.setupRevisions.revision, corn.latestRevision)))
+    const [source] = await db.select().from(schema.setupRevisions).where(and(eq(schema.setupRevisions.setupId, corn.id), eq(schema.setupRevisions.revision, corn.latestRevision)))
+    // A setup of its own for the banded insecticide, so the granular dial has a history apart from the seed rate's.
+    const [band] = await db.insert(schema.setups).values({ farmId, planterId: corn.planterId, name: 'North 12 · rootworm band · Schoolhouse 80', crop: 'corn', latestRevision: 1, createdBy: a.operator.id }).returning()
+    const [rev] = await db.insert(schema.setupRevisions).values({
+      setupId: band!.id, revision: 1, config: source!.config, results: computeSetupResults(source!.config), savedBy: a.operator.id,
+      note: 'The corn setup with Rowguard 15G in a 7 in band on the odd rows.', savedAt: new Date(Date.UTC(2026, 3, 23, 15)),
+    }).returning()
     // 250 ft course at 30 in: each ounce is 4.356 lb per field acre (computed).
     const points = [{ setting: 14, weightOz: 1.55 }, { setting: 18, weightOz: 2.0 }, { setting: 22, weightOz: 2.45 }]
     const fit = fitCatchTest({ points, courseFt: 250, rowSpacingIn: 30, targetLbPerAcre: 8.7, currentSetting: 18 })
     const [run] = await db.insert(schema.calibrationRuns).values({
-      farmId, setupId: corn.id, setupRevisionId: rev!.id, revision: rev!.revision, productName: ROWGUARD.productName, rows: [1, 7], courseFt: 250, rowSpacingIn: 30,
+      farmId, setupId: band!.id, setupRevisionId: rev!.id, revision: 1, productName: ROWGUARD.productName, rows: [1, 7], courseFt: 250, rowSpacingIn: 30,
       targetLbPerAcre: 8.7, points, fit, r2: fit.r2, dialSetting: 18, note: 'Rows 1 and 7 caught in the yard; the dial stays at 18.', runBy: a.operator.id,
       createdAt: new Date(Date.UTC(2026, 3, 24, 15)),
     }).returning()

@@ -6,8 +6,8 @@ test('an operator runs a catch test at three settings and saves the dial setting
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Applications', exact: true }).click()
   await page.getByRole('navigation', { name: 'Applications' }).getByRole('link', { name: 'Catch test' }).click()
   await expect(page.getByTestId('chemical-cautions')).toContainText('The product label is the law')
-  await page.getByLabel('Setup', { exact: true }).selectOption({ label: 'North 12 · corn 34k · river bottoms' })
-  await expect(page.getByText('Revision 3 · 30 in rows')).toBeVisible()
+  await page.getByLabel('Setup', { exact: true }).selectOption({ label: 'North 12 · rootworm band · Schoolhouse 80' })
+  await expect(page.getByText('Revision 1 · 30 in rows')).toBeVisible()
   await page.getByLabel('Product', { exact: true }).fill('Rowguard 15G')
   await page.getByLabel('Rows caught', { exact: true }).fill('1, 7')
   await page.getByLabel('Course length', { exact: true }).fill('250')
@@ -24,22 +24,22 @@ test('an operator runs a catch test at three settings and saves the dial setting
   await expect(page.getByLabel('Dial setting to use', { exact: true })).toHaveValue('19.6')
   await page.screenshot({ path: info.outputPath('catch-test.png'), fullPage: true })
   await page.getByRole('button', { name: 'Save onto the setup' }).click()
-  await expect(page.getByTestId('catch-saved')).toContainText('the dial setting is now revision 4')
+  await expect(page.getByTestId('catch-saved')).toContainText('the dial setting is now revision 2')
   await page.getByTestId('catch-saved').getByRole('link', { name: 'Open the setup' }).click()
-  await expect(page.getByRole('heading', { name: 'North 12 · corn 34k · river bottoms' })).toBeVisible()
-  await expect(page.getByTestId('history').getByRole('listitem')).toHaveCount(4)
+  await expect(page.getByRole('heading', { name: 'North 12 · rootworm band · Schoolhouse 80' })).toBeVisible()
+  await expect(page.getByTestId('history').getByRole('listitem')).toHaveCount(2)
   const runs = page.getByTestId('setup-calibrations').getByRole('listitem')
   await expect(runs.first()).toContainText('Rowguard 15G · target 9.60 lb/ac · dial 19.6')
-  await expect(runs.first()).toContainText('Caught on revision 3, rows 1, 7, 250 ft course, 3 catches, r² 1.000')
-  await expect(runs.first()).toContainText('set in revision 4')
-  // The granular rows (1, 3, 5 … 11) went from 18 to 19.6 in revision 4.
+  await expect(runs.first()).toContainText('Caught on revision 1, rows 1, 7, 250 ft course, 3 catches, r² 1.000')
+  await expect(runs.first()).toContainText('set in revision 2')
+  // The granular rows (1, 3, 5 … 11) went from 18 to 19.6 in revision 2.
   await expect(page.getByTestId('diff')).toContainText('granular dial')
   await expect(page.getByTestId('diff')).toContainText('19.6')
   await page.screenshot({ path: info.outputPath('setup.png'), fullPage: true })
   // Opened straight from a link, the catch-test page renders on the server with the setup chosen.
   const setupId = /\/setups\/(\d+)/.exec(page.url())![1]
   await page.goto(`/applications/catch-test?setup=${setupId}`)
-  await expect(page.getByText('Revision 4 · 30 in rows')).toBeVisible()
+  await expect(page.getByText('Revision 2 · 30 in rows')).toBeVisible()
 })
 
 test('an operator records a restricted-use application, is told what the federal rule needs, and corrects it; the foreman only reads', async ({ page }, info) => {
