@@ -238,11 +238,14 @@ describe('application records', () => {
     const { farm, operator, id } = await farmWithRecord()
     const fix = await operator.post(`/api/application-records/${id}/corrections`, { reason: 'Area was 12 acres', record: { ...recordBody(), areaTreatedAcres: 12, totalAmount: 104.4 } })
     await operator.post('/api/application-records', { ...recordBody(), appliedOn: '2025-05-02' })
+    await operator.post('/api/application-records', { ...recordBody(), appliedOn: '2026-06-01', notes: '=1+1' })
     const res = await (await farm.as('agronomist')).get('/api/application-records/export.csv?season=2026')
     expect(res.status).toBe(200)
     expect(res.headers.get('content-type')).toMatch(/text\/csv/)
     expect(res.headers.get('content-disposition')).toContain('application-records-2026.csv')
     const rows = Papa.parse<Record<string, string>>(String(res.data), { header: true, skipEmptyLines: true }).data
+    // A note that would start a spreadsheet formula is written with a leading quote.
+    expect(rows.pop()!.notes).toBe("'=1+1")
     expect(rows.map((r) => [r.record, r.date, r.time, r.field, r.product, r['EPA reg. no.'], r['restricted use'], r.rate, r['rate unit'], r['total amount'], r['area treated (acres)'], r['certification no.'], r['corrects record'], r['corrected by record']])).toEqual([
       [String(id), '2026-05-02', '09:30', 'Matrix field', 'Matrix 15G', '00000-15', 'yes', '8.7', 'lb/acre', '87', '10', 'PA-0000', '', String(fix.data.id)],
       [String(fix.data.id), '2026-05-02', '09:30', 'Matrix field', 'Matrix 15G', '00000-15', 'yes', '8.7', 'lb/acre', '104.4', '12', 'PA-0000', String(id), ''],

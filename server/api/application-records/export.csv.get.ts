@@ -8,5 +8,6 @@ export default defineEventHandler(async (event) => {
   const csv = await recordsCsv(member.farmId, season)
   setResponseHeader(event, 'content-type', 'text/csv; charset=utf-8')
   setResponseHeader(event, 'content-disposition', `attachment; filename="application-records-${season ?? 'all'}.csv"`)
-  return Papa.unparse({ fields: [...csv.fields], data: csv.data })
+  // Free text could start a spreadsheet formula; escapeFormulae prefixes such cells with a quote.
+  return Papa.unparse({ fields: [...csv.fields], data: csv.data }, { escapeFormulae: true })
 })
