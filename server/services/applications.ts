@@ -1,9 +1,8 @@
 import { and, desc, eq } from 'drizzle-orm'
 import { alias } from 'drizzle-orm/pg-core'
-import type { ApplicationRecordBody, CalibrationBody, FillPlanBody } from '#shared/schemas/applications'
+import type { ApplicationRecordBody, CalibrationBody } from '#shared/schemas/applications'
 import type { SetupConfigBody } from '#shared/schemas/setups'
 import { catchLengthFromRevolutions, fitCatchTest } from '#shared/utils/application'
-import { fillPlan } from '#shared/utils/planning'
 import type { Member } from '../utils/membership'
 import type { Tx } from '../utils/db'
 import { getRevision, saveRevision } from './setups'
@@ -12,18 +11,6 @@ const { calibrationRuns, applicationRecords, fields, setups, users } = schema
 
 // Days a restricted-use application may wait to be recorded (7 CFR 110.3).
 export const RECORD_WITHIN_DAYS = 14
-
-// Acres per fill of each hopper or tank, and the fills and refill stops each field needs.
-export function planFills(body: FillPlanBody) {
-  const containers = body.containers.map((c) => ({ ...c, acresPerFill: fillPlan({ capacity: c.capacity, ratePerAcre: c.ratePerAcre, fieldAcres: 1 }).acresPerFill }))
-  return {
-    containers,
-    fields: body.fields.map((f) => {
-      const byContainer = body.containers.map((c) => ({ name: c.name, ...fillPlan({ capacity: c.capacity, ratePerAcre: c.ratePerAcre, fieldAcres: f.acres }) }))
-      return { name: f.name, acres: f.acres, containers: byContainer, mostRefillStops: Math.max(...byContainer.map((c) => c.refillStops)) }
-    }),
-  }
-}
 
 type RunRow = typeof calibrationRuns.$inferSelect
 const runOut = (r: RunRow, runByName?: string | null) => ({ ...r, runByName: runByName ?? null })

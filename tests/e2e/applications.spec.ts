@@ -87,5 +87,8 @@ test('an operator records a restricted-use application, is told what the federal
   await expect(page.getByTestId('chemical-cautions')).toBeVisible()
   // 8.7 lb per field acre in 30 in rows = 7.99 oz per 1,000 ft (computed).
   await expect(page.getByTestId('granular-out')).toContainText('7.99')
+  // 420 lb of boxes at 8.7 lb/acre cover 48.3 acres, so the 126 acre Big Pivot takes 3 fills and 2 stops (computed).
+  await expect(page.getByTestId('fill-acres')).toContainText('Granular boxes: 48.3 acres per fill')
+  await expect(page.getByTestId('fill-out').getByRole('row').filter({ hasText: 'Big Pivot' })).toContainText('3 fills')
   await page.screenshot({ path: info.outputPath('rates.png'), fullPage: true })
 })

@@ -1,5 +1,5 @@
 import { fillPlanBody } from '#shared/schemas/applications'
-import { planFills } from '../../services/applications'
+import { planFills } from '#shared/utils/fills'
 
 export default defineEventHandler(async (event) => {
   await requireMember(event)
