@@ -6,6 +6,7 @@ import { seedAccounts } from './accounts'
 import { seedEquipment } from './equipment'
 import { seedFields } from './fields'
 import { seedPlans } from './plans'
+import { seedShop } from './shop'
 import { seedApplications } from './applications'
 
 export type SeedDb = ReturnType<typeof drizzle<typeof schema>>
@@ -21,6 +22,7 @@ export async function seedDemo(url: string) {
       const equipment = await seedEquipment(tx as unknown as SeedDb, accounts)
       const made = await seedFields(tx as unknown as SeedDb, accounts)
       await seedPlans(tx as unknown as SeedDb, accounts, equipment, made)
+      await seedShop(tx as unknown as SeedDb, accounts)
       await seedApplications(tx as unknown as SeedDb, accounts)
     })
     return true

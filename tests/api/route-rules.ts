@@ -2,6 +2,7 @@ import type { Role } from '../../shared/types/roles'
 import { sql, type TestFarm } from './helpers'
 import { FIELDS_ROUTES } from './routes-fields'
 import { PLANS_ROUTES } from './routes-plans'
+import { SHOP_ROUTES } from './routes-shop'
 import { APPLICATIONS_ROUTES } from './routes-applications'
 
 export interface RouteRule {
@@ -101,5 +102,6 @@ export const ROUTES: Record<string, RouteRule> = {
   'GET /api/mailbox': { roles: ['owner'] },
   ...FIELDS_ROUTES,
   ...PLANS_ROUTES,
+  ...SHOP_ROUTES,
   ...APPLICATIONS_ROUTES,
 }

@@ -1,0 +1,6 @@
+import { listTemplates } from '../../services/shop'
+
+export default defineEventHandler(async (event) => {
+  const member = await requireMember(event)
+  return listTemplates(member.farmId)
+})
