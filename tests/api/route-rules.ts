@@ -4,6 +4,7 @@ import { FIELDS_ROUTES } from './routes-fields'
 import { PLANS_ROUTES } from './routes-plans'
 import { SHOP_ROUTES } from './routes-shop'
 import { CHECKS_ROUTES } from './routes-checks'
+import { APPLICATIONS_ROUTES } from './routes-applications'
 
 export interface RouteRule {
   // Roles allowed; the others must get 403.
@@ -107,4 +108,5 @@ export const ROUTES: Record<string, RouteRule> = {
   ...PLANS_ROUTES,
   ...SHOP_ROUTES,
   ...CHECKS_ROUTES,
+  ...APPLICATIONS_ROUTES,
 }
