@@ -50,7 +50,8 @@ export function paths() {
 function asPostgres(bin, args, opts = {}) {
   const cmd = isRoot ? 'runuser' : bin
   const full = isRoot ? ['-u', 'postgres', '--', bin, ...args] : args
-  return spawnSync(cmd, full, { encoding: 'utf8', ...opts })
+  // cwd '/': the postgres user may not be allowed into the checkout.
+  return spawnSync(cmd, full, { encoding: 'utf8', cwd: '/', ...opts })
 }
 
 function isReady(bin) {
@@ -125,9 +126,14 @@ export function ensureDatabase(name, { fresh = false } = {}) {
 export { findBinDir, PG_USER, PG_PASSWORD }
 
 // Restarts the cluster (fault tests): connections drop, the server comes back on the same port.
+// A cluster already serving the port (another checkout's, reused by dbUp) is restarted where it lives.
 export function dbRestart() {
   const bin = findBinDir()
   const p = paths()
-  const r = asPostgres(`${bin}/pg_ctl`, ['-D', p.data, '-l', p.log, '-m', 'fast', '-w', '-t', '60', 'restart'])
+  let data = p.data
+  try {
+    data = psql('postgres', 'SHOW data_directory') || p.data
+  } catch { /* not up: restart our own */ }
+  const r = asPostgres(`${bin}/pg_ctl`, ['-D', data, '-l', data === p.data ? p.log : `${data}/../postgres.log`, '-m', 'fast', '-w', '-t', '60', 'restart'])
   if (r.status !== 0) throw new Error(`restart failed: ${r.stderr}`)
 }
