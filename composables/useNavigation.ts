@@ -16,8 +16,8 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/planters', label: 'Equipment', roles: ALL, hint: 'Planters, row units and drive trains' },
   { to: '/inventory', label: 'Plates & sprockets', roles: ['owner', 'foreman', 'operator'], hint: 'What is on the shelf' },
   { to: '/checks', label: 'Field checks', roles: ALL, hint: 'Seed drop, stand counts, spacing uniformity and the replant aid' },
-  { to: '/shop', label: 'Shop', roles: ['owner', 'foreman', 'operator'], hint: 'Inspections, the work board and the maintenance log' },
   { to: '/applications', label: 'Applications', roles: ALL, hint: 'Granular rates, catch tests and pesticide records' },
+  { to: '/shop', label: 'Shop', roles: ['owner', 'foreman', 'operator'], hint: 'Inspections, the work board and the maintenance log' },
   { to: '/members', label: 'People', roles: ['owner'], hint: 'Invite members and set their roles' },
   { to: '/mailbox', label: 'Mailbox', roles: ['owner'], hint: 'Messages Rowbench sent (demo mailbox)' },
 ]

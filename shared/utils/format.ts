@@ -29,3 +29,8 @@ export function fmtDay(d: string | Date | null | undefined): string {
 export function fmtLabel(s: string | null | undefined): string {
   return s ? s.charAt(0).toUpperCase() + s.slice(1) : '—'
 }
+
+// An amount shown as entered, up to `digits` decimals, with thousands separators: 6.5, 1,250, 387.
+export function fmtQty(n: number | null | undefined, digits = 2): string {
+  return n == null || !Number.isFinite(n) ? '—' : n.toLocaleString('en-US', { maximumFractionDigits: digits })
+}
