@@ -16,7 +16,8 @@ export function backup(url, dir, uploads = uploadsDir()) {
   const file = resolve(dir, `rowbench-${stamp}.dump`)
   const r = spawnSync(`${findBinDir()}/pg_dump`, ['--format=custom', '--no-owner', '--file', file, url], { stdio: 'inherit' })
   if (r.status !== 0) throw new Error('pg_dump failed')
-  if (!existsSync(uploads)) return { file, archive: null }
+  // Uploads on object storage (NUXT_UPLOAD_STORAGE=config) are not on this disk; the bucket has its own backups.
+  if (process.env.NUXT_UPLOAD_STORAGE === 'config' || !existsSync(uploads)) return { file, archive: null }
   const archive = uploadsArchiveFor(file)
   const t = spawnSync('tar', ['-czf', archive, '-C', uploads, '.'], { stdio: 'inherit' })
   if (t.status !== 0) {
@@ -35,7 +36,7 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   try {
     const { file, archive } = backup(url, resolve(root, process.argv[2] || 'backups'))
     console.log(`[rowbench] backup written to ${file}`)
-    console.log(archive ? `[rowbench] uploaded files written to ${archive}` : `[rowbench] no uploads folder at ${uploadsDir()}; only the database was backed up`)
+    console.log(archive ? `[rowbench] uploaded files written to ${archive}` : `[rowbench] no uploads folder at ${uploadsDir()} (or uploads on object storage); only the database was backed up`)
   } catch (err) {
     console.error(`[rowbench] ${err.message}`)
     process.exit(1)
