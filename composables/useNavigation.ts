@@ -17,6 +17,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/plans', label: 'Plans', roles: ALL, hint: 'Crop plans per field, their review and setups' },
   { to: '/season', label: 'Season', roles: ALL, hint: 'Seed needs, planting days and the seed order' },
   { to: '/shop', label: 'Shop', roles: ['owner', 'foreman', 'operator'], hint: 'Inspections, the work board and the maintenance log' },
+  { to: '/applications', label: 'Applications', roles: ALL, hint: 'Granular rates, catch tests and pesticide records' },
   { to: '/members', label: 'People', roles: ['owner'], hint: 'Invite members and set their roles' },
   { to: '/mailbox', label: 'Mailbox', roles: ['owner'], hint: 'Messages Rowbench sent (demo mailbox)' },
 ]

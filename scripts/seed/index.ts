@@ -8,6 +8,7 @@ import { seedFields } from './fields'
 import { seedPlans } from './plans'
 import { seedShop } from './shop'
 import { seedChecks } from './checks'
+import { seedApplications } from './applications'
 
 export type SeedDb = ReturnType<typeof drizzle<typeof schema>>
 
@@ -24,6 +25,7 @@ export async function seedDemo(url: string) {
       await seedPlans(tx as unknown as SeedDb, accounts, equipment, made)
       await seedShop(tx as unknown as SeedDb, accounts)
       await seedChecks(tx as unknown as SeedDb, accounts)
+      await seedApplications(tx as unknown as SeedDb, accounts)
     })
     return true
   } finally {

@@ -150,7 +150,8 @@ export async function createSetup(member: Member, body: z.infer<typeof setupCrea
 }
 
 // A new revision on top of the one the editor started from; anything else is a stale save (409).
-export async function saveRevision(member: Member, setupId: number, body: z.infer<typeof setupRevisionBody>) {
+// `within` writes what belongs with the revision (a catch test that set it) in the same transaction.
+export async function saveRevision(member: Member, setupId: number, body: z.infer<typeof setupRevisionBody>, within?: (tx: Tx, revision: typeof setupRevisions.$inferSelect) => Promise<void>) {
   const saved = await useDb().transaction(async (tx) => {
     const [setup] = await tx.select().from(setups).where(and(eq(setups.id, setupId), eq(setups.farmId, member.farmId))).for('update')
     if (!setup) notFound('Setup')
@@ -165,6 +166,7 @@ export async function saveRevision(member: Member, setupId: number, body: z.infe
     await tx.update(setups).set({ latestRevision: revision, crop: config.crop }).where(eq(setups.id, setupId))
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'revise', entity: 'setup', entityId: setupId, before: { revision: setup.latestRevision }, after: { revision } })
     await afterRevisionHooks(tx, member, setupId, revision)
+    if (within) await within(tx, rev!)
     return rev!
   })
   void flushOutbox()

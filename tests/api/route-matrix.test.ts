@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { readdirSync, statSync } from 'node:fs'
 import { join, relative, resolve } from 'node:path'
-import { Client, createFarm, type TestFarm } from './helpers'
+import { Client, createFarm, sql, type TestFarm } from './helpers'
 import { ROUTES, type RouteRule } from './route-rules'
 import type { Role } from '../../shared/types/roles'
 
@@ -19,6 +19,11 @@ function routeKey(file: string) {
   if (!m) throw new Error(`route file without a method suffix: ${rel}`)
   const path = `/api/${m[1] === 'index' ? '' : m[1]}`.replace(/\/$/, '').replace(/\[(\w+)\]/g, ':$1')
   return `${m[2]!.toUpperCase()} ${path}`
+}
+
+async function auditCount() {
+  const [row] = await sql<{ n: string }>('select count(*) as n from audit_log')
+  return Number(row!.n)
 }
 
 const discovered = routeFiles(apiDir).map(routeKey).sort()
@@ -50,10 +55,14 @@ describe('route matrix', () => {
       return
     }
     expect((await new Client().request(method, path, body)).status, `${key} anonymous`).toBe(401)
+    const audited = method !== 'GET' && rule.audit !== false && !pattern.startsWith('/api/calc/')
     for (const role of ROLES) {
+      const before = audited ? await auditCount() : 0
       const res = await clients[role].request(method, path, body)
       if (rule.roles.includes(role)) expect([401, 403], `${key} as ${role} should be allowed, got ${res.status} ${JSON.stringify(res.data).slice(0, 200)}`).not.toContain(res.status)
       else expect(res.status, `${key} as ${role} should be refused`).toBe(403)
+      if (audited && res.status < 300) expect(await auditCount(), `${key} as ${role} succeeded without an audit entry`).toBeGreaterThan(before)
+      if (audited && res.status >= 400) expect(await auditCount(), `${key} as ${role} was refused but left an audit entry`).toBe(before)
     }
     if (pattern.includes(':') && rule.fixture) {
       const foreign = await rule.fixture(b)

@@ -4,6 +4,7 @@ import { FIELDS_ROUTES } from './routes-fields'
 import { PLANS_ROUTES } from './routes-plans'
 import { SHOP_ROUTES } from './routes-shop'
 import { CHECKS_ROUTES } from './routes-checks'
+import { APPLICATIONS_ROUTES } from './routes-applications'
 
 export interface RouteRule {
   // Roles allowed; the others must get 403.
@@ -12,6 +13,9 @@ export interface RouteRule {
   // Creates the records the path's :params point at, in the given farm.
   fixture?: (farm: TestFarm) => Promise<Record<string, number | string>>
   body?: (ids: Record<string, number | string>) => unknown
+  // A state-changing route that stores nothing of the farm's (a calculation, a search) says so here;
+  // every other accepted POST, PATCH, PUT or DELETE must add to the audit log.
+  audit?: false
 }
 
 const ALL: Role[] = ['owner', 'agronomist', 'operator', 'foreman']
@@ -62,7 +66,7 @@ export const ROUTES: Record<string, RouteRule> = {
   'DELETE /api/planters/:id': { roles: EDIT, fixture: withId('planter') },
   'POST /api/planters/:id/sections': { roles: EDIT, fixture: withId('planter'), body: () => ({ name: 'Split', rows: [2] }) },
   'PATCH /api/planters/:id/row-units': { roles: EDIT, fixture: withId('planter'), body: () => ({ positions: [1], changes: { depthIn: 2 } }) },
-  'POST /api/planters/:id/solve': { roles: ALL, fixture: withId('planter'), body: () => ({ targetSeedsPerAcre: 34000 }) },
+  'POST /api/planters/:id/solve': { roles: ALL, fixture: withId('planter'), body: () => ({ targetSeedsPerAcre: 34000 }), audit: false },
   'GET /api/planters/:id/rate-chart': { roles: ALL, fixture: withId('planter') },
   'GET /api/planters/:id/rate-chart.csv': { roles: ALL, fixture: withId('planter') },
   'GET /api/planters/:id/setup-draft': { roles: ALL, fixture: withId('planter') },
@@ -104,4 +108,5 @@ export const ROUTES: Record<string, RouteRule> = {
   ...PLANS_ROUTES,
   ...SHOP_ROUTES,
   ...CHECKS_ROUTES,
+  ...APPLICATIONS_ROUTES,
 }

@@ -30,7 +30,7 @@ export const FIELDS_ROUTES: Record<string, RouteRule> = {
   'DELETE /api/fields/:id': { roles: EDIT, fixture: field },
   'PUT /api/fields/:id/boundary': { roles: EDIT, fixture: field, body: () => SQUARE },
   'DELETE /api/fields/:id/boundary': { roles: EDIT, fixture: outlined },
-  'POST /api/fields/import': { roles: EDIT, body: () => ({ csv: `name,acres\nMatrix import ${tag()},40\n`, mode: 'check' }) },
+  'POST /api/fields/import': { roles: EDIT, body: () => ({ csv: `name,acres\nMatrix import ${tag()},40\n`, mode: 'all-or-nothing' }) },
   'GET /api/seed-lots': { roles: ALL },
   'POST /api/seed-lots': { roles: EDIT, body: () => ({ crop: 'soybeans', variety: 'Matrix 2.5', lotNumber: `MXN-${tag()}`, seedsPerLb: 2800, germinationPercent: 92, unitSize: 140000 }) },
   'PATCH /api/seed-lots/:id': { roles: [...EDIT, 'foreman'], fixture: lot, body: () => ({ unitsOnHand: 3 }) },

@@ -4,6 +4,7 @@ import {
   acresPerTank, catchCourse653, catchLengthFromRevolutions, computeGranular, computeLiquid, courseLengthForFraction,
   dryRateFromCatch, fitCatchTest, gallonsForNutrient, gpmForGpa, gpmFromTimedCatch, solutionFactor,
 } from '../../shared/utils/application'
+import { planFills } from '../../shared/utils/fills'
 
 describe('granular row and field rates', () => {
   it('oz per 1,000 ft ↔ lb per acre: 8 oz per 1,000 ft in 30 in rows → 8.712 lb/acre (computed from oz × 43,560 ÷ (1,000 × row ft) ÷ 16)', () => {
@@ -145,5 +146,57 @@ describe('liquid', () => {
   it('pump flow from a timed catch: 64 oz in 30 s → 1 GPM; 300 gal at 15 GPA → 20 acres (computed)', () => {
     expect(gpmFromTimedCatch({ ounces: 64, seconds: 30 }).gpm).toBeCloseTo(1, 12)
     expect(acresPerTank({ tankGal: 300, gpa: 15 }).acres).toBe(20)
+  })
+})
+
+describe('round trips and the 653 ft rule (properties)', () => {
+  const width = fc.double({ min: 5, max: 60, noNaN: true })
+  const lb = fc.double({ min: 0.1, max: 400, noNaN: true })
+
+  it('the 653 ft rule (University of Missouri Extension G1273) stays within 0.1 % of the exact course area for any row width', () => {
+    fc.assert(fc.property(width, lb, (rowWidthIn, lbPerAcre) => {
+      const { ounces } = catchCourse653({ lbPerAcre, rowWidthIn })
+      expect(Math.abs(dryRateFromCatch({ ounces, lengthFt: 653, widthIn: rowWidthIn }).lbPerAcre / lbPerAcre - 1)).toBeLessThan(0.001)
+    }))
+  })
+
+  it('a catch over the 1/128 acre course of any width reads oz × 8 lb/acre (University of Georgia Extension, Sumner)', () => {
+    fc.assert(fc.property(width, fc.double({ min: 0.1, max: 100, noNaN: true }), (widthIn, ounces) => {
+      const { lengthFt } = courseLengthForFraction({ widthIn, fractionOfAcre: 1 / 128 })
+      expect(dryRateFromCatch({ ounces, lengthFt, widthIn }).lbPerAcre / (ounces * 8)).toBeCloseTo(1, 10)
+    }))
+  })
+
+  it('GPM → GPA → GPM returns the start, and a solution heavier than water always calibrates at a higher water rate (EDIS WG013; UNL CropWatch 2016)', () => {
+    fc.assert(fc.property(fc.double({ min: 0.01, max: 5, noNaN: true }), fc.double({ min: 1, max: 15, noNaN: true }), width, fc.double({ min: 1, max: 2, noNaN: true }), (gpm, mph, widthIn, sg) => {
+      const l = computeLiquid({ gpm, mph, widthIn, specificGravity: sg })
+      expect(gpmForGpa({ gpa: l.gpa, mph, widthIn }).gpm / gpm).toBeCloseTo(1, 10)
+      expect(l.waterEquivalentGpa).toBeGreaterThanOrEqual(l.gpa)
+    }))
+  })
+
+  it('acres per tank × GPA gives back the tank, and a timed catch scales with time (computed)', () => {
+    fc.assert(fc.property(fc.double({ min: 1, max: 2000, noNaN: true }), fc.double({ min: 0.5, max: 100, noNaN: true }), (tankGal, gpa) => {
+      expect(acresPerTank({ tankGal, gpa }).acres * gpa / tankGal).toBeCloseTo(1, 10)
+      expect(gpmFromTimedCatch({ ounces: 2 * tankGal, seconds: 120 }).gpm).toBeCloseTo(gpmFromTimedCatch({ ounces: tankGal, seconds: 60 }).gpm, 10)
+    }))
+  })
+})
+
+describe('fill planning across hoppers and fields', () => {
+  it('3,000 lb at 150 lb/acre covers 20 acres, so 70 acres take 4 fills and 3 stops; the field stops as often as its neediest hopper (computed)', () => {
+    const plan = planFills({
+      containers: [{ name: 'Fertilizer', kind: 'fertilizer hopper', capacity: 3000, ratePerAcre: 150 }, { name: 'Boxes', kind: 'granular hopper', capacity: 420, ratePerAcre: 8.4 }],
+      fields: [{ name: 'Schoolhouse 80', acres: 70 }, { name: 'East Forty', acres: 20 }],
+    })
+    expect(plan.containers.map((c) => c.acresPerFill)).toEqual([20, 50])
+    expect(plan.fields.map((f) => [f.containers.map((c) => c.refillStops), f.mostRefillStops])).toEqual([[[3, 1], 3], [[0, 0], 0]])
+  })
+
+  it('never plans fewer stops than the acres need (property)', () => {
+    fc.assert(fc.property(fc.double({ min: 1, max: 5000, noNaN: true }), fc.double({ min: 0.5, max: 300, noNaN: true }), fc.double({ min: 0.1, max: 2000, noNaN: true }), (capacity, ratePerAcre, acres) => {
+      const f = planFills({ containers: [{ name: 'c', kind: 'liquid tank', capacity, ratePerAcre }], fields: [{ name: 'f', acres }] }).fields[0]!
+      expect((f.mostRefillStops + 1) * capacity / ratePerAcre).toBeGreaterThanOrEqual(acres * (1 - 1e-12))
+    }))
   })
 })
