@@ -159,6 +159,24 @@ describe('parts to pull and the install', () => {
     expect(audit!.n).toBe(1)
   })
 
+  it('moves the crop plans that approved the installed revision to "planter set", and no others', async () => {
+    const ctx = await shopFarm(4)
+    const [field] = await sql<{ id: number }>('insert into fields (farm_id, name, acres) values ($1, $2, 80) returning id', [ctx.farm.farmId, 'Install 80'])
+    const plan = async (status: string, approvedRevision: number | null) => (await sql<{ id: number }>(
+      `insert into crop_plans (farm_id, season, field_id, crop, target_stand, row_spacing_in, planter_id, setup_id, status, approved_revision)
+       values ($1, 2027, $2, 'soybeans', 130000, 30, $3, $4, $5, $6) returning id`, [ctx.farm.farmId, field!.id, ctx.planterId, ctx.setupId, status, approvedRevision]))[0]!.id
+    const approved = await plan('approved', 1)
+    const waiting = await plan('submitted', null)
+    const { planterConfigVersion } = (await ctx.foreman.get(`/api/setups/${ctx.setupId}/pick-list`)).data
+    const res = await ctx.foreman.post(`/api/setups/${ctx.setupId}/install`, { revision: 1, planterConfigVersion })
+    expect(res.status).toBe(200)
+    expect(res.data.plansSetUp).toEqual([approved])
+    const rows = await sql<{ id: number, status: string }>('select id, status from crop_plans where id = any($1) order by id', [[approved, waiting]])
+    expect(rows).toEqual([{ id: approved, status: 'set-up' }, { id: waiting, status: 'submitted' }])
+    const [event] = await sql<{ to: string, comment: string }>('select to_status as to, comment from plan_events where plan_id = $1', [approved])
+    expect(event).toEqual({ to: 'set-up', comment: 'Revision 1 was installed on the planter' })
+  })
+
   it('lets only the foreman and the owner mark a setup installed', async () => {
     const ctx = await shopFarm(4)
     const before = await counts(ctx)
