@@ -1,19 +1,30 @@
 #!/usr/bin/env node
-// npm run db:backup [DIR] — pg_dump in custom format to a timestamped file.
+// npm run db:backup [DIR] — pg_dump in custom format to a timestamped file, and the uploaded files
+// (NUXT_UPLOAD_DIR or .data/uploads) beside it as a tar.gz with the same timestamp.
 import { spawnSync } from 'node:child_process'
-import { mkdirSync } from 'node:fs'
+import { existsSync, mkdirSync, rmSync } from 'node:fs'
 import { resolve } from 'node:path'
 import { root } from './lib/deps.mjs'
 import { dbUp, findBinDir, localUrl } from './lib/pg.mjs'
 import { suffix } from './lib/slot.mjs'
+import { uploadsArchiveFor, uploadsDir } from './lib/uploads-dir.mjs'
 
-export function backup(url, dir) {
+// The dump is taken first, so every upload row it holds has its file in the archive taken after.
+export function backup(url, dir, uploads = uploadsDir()) {
   mkdirSync(dir, { recursive: true })
   const stamp = new Date().toISOString().replace(/[:.]/g, '-')
   const file = resolve(dir, `rowbench-${stamp}.dump`)
   const r = spawnSync(`${findBinDir()}/pg_dump`, ['--format=custom', '--no-owner', '--file', file, url], { stdio: 'inherit' })
   if (r.status !== 0) throw new Error('pg_dump failed')
-  return file
+  // Uploads on object storage (NUXT_UPLOAD_STORAGE=config) are not on this disk; the bucket has its own backups.
+  if (process.env.NUXT_UPLOAD_STORAGE === 'config' || !existsSync(uploads)) return { file, archive: null }
+  const archive = uploadsArchiveFor(file)
+  const t = spawnSync('tar', ['-czf', archive, '-C', uploads, '.'], { stdio: 'inherit' })
+  if (t.status !== 0) {
+    rmSync(archive, { force: true })
+    throw new Error(`tar failed on ${uploads}; the database dump ${file} was written, the uploaded files were not`)
+  }
+  return { file, archive }
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
@@ -22,6 +33,12 @@ if (import.meta.url === `file://${process.argv[1]}`) {
     dbUp()
     url = localUrl(`rowbench${suffix}`)
   }
-  const file = backup(url, resolve(root, process.argv[2] || 'backups'))
-  console.log(`[rowbench] backup written to ${file}`)
+  try {
+    const { file, archive } = backup(url, resolve(root, process.argv[2] || 'backups'))
+    console.log(`[rowbench] backup written to ${file}`)
+    console.log(archive ? `[rowbench] uploaded files written to ${archive}` : `[rowbench] no uploads folder at ${uploadsDir()} (or uploads on object storage); only the database was backed up`)
+  } catch (err) {
+    console.error(`[rowbench] ${err.message}`)
+    process.exit(1)
+  }
 }

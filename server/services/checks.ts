@@ -2,8 +2,8 @@ import Decimal from 'decimal.js'
 import { and, desc, eq, lt, sql } from 'drizzle-orm'
 import { alias } from 'drizzle-orm/pg-core'
 import type { z } from 'zod'
-import type { applySlipBody, checkCreateBody, checkListQuery, checkReviewBody, SeedDropCheckBody, SpacingCheckBody, StandCountCheckBody } from '#shared/schemas/checks'
-import type { CheckResults, SeedDropResults, SpacingResults, StandCountResults } from '#shared/types/checks'
+import type { applySlipBody, checkCreateBody, checkPhotosBody, checkListQuery, checkReviewBody, SeedDropCheckBody, SpacingCheckBody, StandCountCheckBody } from '#shared/schemas/checks'
+import { CHECK_REVIEWER_ROLES, type CheckResults, type SeedDropResults, type SpacingResults, type StandCountResults } from '#shared/types/checks'
 import type { SetupConfig, SetupResults } from '#shared/types/setup'
 import type { Member } from '../utils/membership'
 import { solvePlanter } from './equipment'
@@ -203,7 +203,7 @@ export async function listChecks(farmId: number, q: z.infer<typeof checkListQuer
 }
 
 export async function getCheck(farmId: number, id: number) {
-  const [row] = await useDb().select({ ...listColumns, inputs: fieldChecks.inputs, planterId: setups.planterId, planterName: planters.name, planterSlipPercent: planters.slipPercent, planterConfigVersion: planters.configVersion })
+  const [row] = await useDb().select({ ...listColumns, authorId: fieldChecks.authorId, inputs: fieldChecks.inputs, planterId: setups.planterId, planterName: planters.name, planterSlipPercent: planters.slipPercent, planterConfigVersion: planters.configVersion })
     .from(fieldChecks)
     .leftJoin(setups, eq(setups.id, fieldChecks.setupId))
     .leftJoin(planters, eq(planters.id, setups.planterId))
@@ -249,5 +249,27 @@ export async function applyCheckSlip(member: Member, id: number, body: z.infer<t
     await tx.update(fieldChecks).set({ slipAppliedPercent: slipPercent, slipAppliedPlanterId: before.id, slipAppliedBy: member.user.id, slipAppliedAt: new Date() }).where(eq(fieldChecks.id, id))
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'update', entity: 'planter', entityId: before.id, before: { slipPercent: before.slipPercent }, after: { slipPercent, fromCheckId: id } })
     return { planterId: before.id, slipPercent: after!.slipPercent, configVersion: after!.configVersion, fromCheckId: id }
+  })
+}
+
+const MAX_CHECK_PHOTOS = 10
+
+// Adds photos to a check already taken: its author, the owner or an agronomist; ids already on the
+// check are kept once.
+export async function addCheckPhotos(member: Member, id: number, body: z.infer<typeof checkPhotosBody>) {
+  return useDb().transaction(async (tx) => {
+    const [check] = await tx.select({ authorId: fieldChecks.authorId, photoUploadIds: fieldChecks.photoUploadIds }).from(fieldChecks)
+      .where(and(eq(fieldChecks.id, id), eq(fieldChecks.farmId, member.farmId))).for('update')
+    if (!check) notFound('Check')
+    const reviewer = (CHECK_REVIEWER_ROLES as readonly string[]).includes(member.role)
+    if (!reviewer && check.authorId !== member.user.id) throw createError({ statusCode: 403, message: 'Only the author of the check, the owner or an agronomist can add photos to it' })
+    await assertFarmUploads(tx, member.farmId, body.uploadIds, PHOTO_TYPES, 'uploadIds')
+    const photoUploadIds = [...new Set([...check.photoUploadIds, ...body.uploadIds])]
+    if (photoUploadIds.length > MAX_CHECK_PHOTOS) {
+      badRequest(`A check keeps at most ${MAX_CHECK_PHOTOS} photos`, { uploadIds: `This check has ${check.photoUploadIds.length}; add at most ${MAX_CHECK_PHOTOS - check.photoUploadIds.length}` })
+    }
+    await tx.update(fieldChecks).set({ photoUploadIds }).where(eq(fieldChecks.id, id))
+    await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'add-photos', entity: 'field_check', entityId: id, before: { photoUploadIds: check.photoUploadIds }, after: { photoUploadIds } })
+    return { id, photoUploadIds }
   })
 }

@@ -5,6 +5,7 @@ import type { Member } from '../utils/membership'
 import type { Db, Tx } from '../utils/db'
 import { getPlanter, type PlanterDetail } from './equipment'
 import { getRevision } from './setups'
+import { setupInstalled } from './plans'
 
 const { setups, setupRevisions, planters, driveSections, driveStages, rowUnits, seedPlates, sprockets } = schema
 
@@ -105,11 +106,12 @@ export async function installSetup(member: Member, setupId: number, body: { revi
     await tx.update(setups).set({ installedRevision: null, installedAt: null }).where(and(eq(setups.planterId, locked.id), sql`${setups.id} <> ${setupId}`))
     const installedAt = new Date()
     await tx.update(setups).set({ installedRevision: body.revision, installedAt }).where(eq(setups.id, setupId))
+    const plansSetUp = await setupInstalled(tx, member, setupId, body.revision)
     await writeAudit(tx, {
       farmId: member.farmId, userId: member.user.id, action: 'install', entity: 'setup', entityId: setupId,
       before: { installedRevision: setup.installedRevision, planterConfigVersion: locked.configVersion },
       after: { installedRevision: body.revision, planterConfigVersion: after!.configVersion, plates: pick.plates.map((l) => [l.label, l.pull, l.putBack]), sprockets: pick.sprockets.map((l) => [l.label, l.pull, l.putBack]) },
     })
-    return { setupId, installedRevision: body.revision, installedAt, planterConfigVersion: after!.configVersion, pulled: [...pick.plates, ...pick.sprockets].map((l) => ({ label: l.label, pull: l.pull, putBack: l.putBack, after: l.after })) }
+    return { setupId, installedRevision: body.revision, installedAt, planterConfigVersion: after!.configVersion, plansSetUp, pulled: [...pick.plates, ...pick.sprockets].map((l) => ({ label: l.label, pull: l.pull, putBack: l.putBack, after: l.after })) }
   })
 }

@@ -280,6 +280,19 @@ export async function setupRevised(tx: Tx, member: Member, setupId: number, revi
   }
 }
 
+// Putting a setup's approved revision on the planter is the "planter set" step of the plans that
+// approved it; a plan approved on another revision stays where it is.
+export async function setupInstalled(tx: Tx, member: Member, setupId: number, revision: number) {
+  const ready = await tx.select().from(cropPlans)
+    .where(and(eq(cropPlans.setupId, setupId), eq(cropPlans.farmId, member.farmId), eq(cropPlans.status, 'approved'), eq(cropPlans.approvedRevision, revision))).for('update')
+  for (const plan of ready) {
+    await tx.update(cropPlans).set({ status: 'set-up', updatedAt: new Date() }).where(eq(cropPlans.id, plan.id))
+    await recordTransition(tx, member, plan, 'set-up', `Revision ${revision} was installed on the planter`, revision)
+    await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'transition', entity: 'crop-plan', entityId: plan.id, before: { status: plan.status }, after: { status: 'set-up', installedRevision: revision } })
+  }
+  return ready.map((p) => p.id)
+}
+
 export async function listComments(farmId: number, planId: number) {
   const db = useDb()
   await planRow(db, farmId, planId)

@@ -99,7 +99,10 @@ export async function updateInspectionItem(member: Member, itemId: number, patch
     if (!row) notFound('Inspection item')
     if (patch.result === undefined && patch.notes === undefined && patch.photoUploadIds === undefined) badRequest('There is nothing to change', { result: 'Choose a result or add a note' })
     if (row.status === 'completed') throw createError({ statusCode: 409, message: 'This inspection is completed; start a new one to record changes.' })
-    const [after] = await tx.update(inspectionItems).set(patch).where(eq(inspectionItems.id, itemId)).returning()
+    // Only this farm's photos may be linked; the ids are kept once each, in the order sent.
+    if (patch.photoUploadIds) await assertFarmUploads(tx, member.farmId, patch.photoUploadIds, PHOTO_TYPES, 'photoUploadIds')
+    const changes = patch.photoUploadIds ? { ...patch, photoUploadIds: [...new Set(patch.photoUploadIds)] } : patch
+    const [after] = await tx.update(inspectionItems).set(changes).where(eq(inspectionItems.id, itemId)).returning()
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'update', entity: 'inspection_item', entityId: itemId, before: row.item, after })
     return after!
   })
@@ -133,7 +136,8 @@ export async function listWorkItems(farmId: number, q: z.infer<typeof workItemQu
   return useDb().select({
     id: workItems.id, planterId: workItems.planterId, planterName: planters.name, title: workItems.title, notes: workItems.notes, status: workItems.status,
     assignedTo: workItems.assignedTo, assignedToName: assignee, inspectionItemId: workItems.inspectionItemId, createdAt: workItems.createdAt, closedAt: workItems.closedAt,
-  }).from(workItems).innerJoin(planters, eq(planters.id, workItems.planterId))
+    photoUploadIds: sql<number[]>`coalesce(${inspectionItems.photoUploadIds}, '{}')`,
+  }).from(workItems).innerJoin(planters, eq(planters.id, workItems.planterId)).leftJoin(inspectionItems, eq(inspectionItems.id, workItems.inspectionItemId))
     .where(and(...where)).orderBy(desc(workItems.createdAt)).limit(300)
 }
 

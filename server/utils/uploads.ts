@@ -26,6 +26,7 @@ import type { Tx } from './db'
 export const UPLOAD_MAX_BYTES = 10 * 1024 * 1024
 export const UPLOAD_TYPES = ['text/csv', 'image/jpeg', 'image/png', 'image/webp'] as const
 export type UploadType = (typeof UPLOAD_TYPES)[number]
+export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const satisfies readonly UploadType[]
 export type UploadRow = typeof schema.uploads.$inferSelect
 
 const TYPE_NAMES: Record<UploadType, string> = { 'text/csv': 'CSV or text', 'image/jpeg': 'JPEG', 'image/png': 'PNG', 'image/webp': 'WebP' }

@@ -85,3 +85,8 @@ export type CheckCreateBody = z.infer<typeof checkCreateBody>
 export type SeedDropCheckBody = z.infer<typeof seedDropCheckBody>
 export type StandCountCheckBody = z.infer<typeof standCountCheckBody>
 export type SpacingCheckBody = z.infer<typeof spacingCheckBody>
+
+// Photos added to a check after it was taken (a dig photographed later, a gap found on a second walk).
+export const checkPhotosBody = z.strictObject({
+  uploadIds: z.array(recordId('Photo'), { error: 'Photos must be a list' }).min(1, 'Choose at least one photo').max(10, 'Attach at most 10 photos'),
+})

@@ -29,7 +29,7 @@ export const inspectionListQuery = z.object({ planterId: z.coerce.number().int()
 export const inspectionItemPatch = z.strictObject({
   result: z.enum(ITEM_RESULTS, { error: 'Choose ok, needs fixing or replaced' }).nullable(),
   notes: optionalText(2000),
-  photoUploadIds: z.array(z.number().int().positive(), { error: 'Photos must be a list of ids' }).max(10, 'At most 10 photos').optional(),
+  photoUploadIds: z.array(z.number().int().positive().max(2_147_483_647, 'Photos must be a list of ids'), { error: 'Photos must be a list of ids' }).max(10, 'At most 10 photos').optional(),
 }).partial()
 
 export const inspectionComplete = z.strictObject({ notes: optionalText(2000) })

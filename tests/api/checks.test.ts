@@ -241,6 +241,65 @@ describe('stored checks', () => {
   })
 })
 
+describe('photos added to a check after it was taken', () => {
+  const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52])
+
+  it('lets the author, the owner or an agronomist add this farm\'s photos, audits it, and refuses the rest without a change', async () => {
+    const { farm, operator } = await farmWithSetup()
+    const first = await sendFile(operator, png, 'dig.png')
+    const made = await operator.post('/api/checks', { kind: 'stand-count', counts: [30, 32], lengthFt: 17.424, rowSpacingIn: 30, photoUploadIds: [first.data.id] })
+    expect(made.status).toBe(201)
+    const checkId = made.data.id as number
+    const later = await sendFile(operator, png, 'gap.png')
+    const added = await operator.post(`/api/checks/${checkId}/photos`, { uploadIds: [later.data.id, first.data.id] })
+    expect(added.status).toBe(200)
+    expect(added.data.photoUploadIds).toEqual([first.data.id, later.data.id])
+    expect((await operator.get(`/api/checks/${checkId}`)).data.photoUploadIds).toEqual([first.data.id, later.data.id])
+    const [audit] = await sql<{ action: string, user_id: number, before: unknown, after: unknown }>(`select action, user_id, before, after from audit_log where entity = 'field_check' and entity_id = $1 order by id desc limit 1`, [checkId])
+    expect(audit).toEqual({ action: 'add-photos', user_id: farm.users.operator.id, before: { photoUploadIds: [first.data.id] }, after: { photoUploadIds: [first.data.id, later.data.id] } })
+
+    const agronomist = await farm.as('agronomist')
+    const third = await sendFile(agronomist, png, 'leaf.png')
+    expect((await agronomist.post(`/api/checks/${checkId}/photos`, { uploadIds: [third.data.id] })).data.photoUploadIds).toHaveLength(3)
+
+    // An operator may add photos to their own checks only; the foreman takes no checks.
+    const agronomists = await agronomist.post('/api/checks', { kind: 'stand-count', counts: [31], lengthFt: 17.424, rowSpacingIn: 30 })
+    const notMine = await operator.post(`/api/checks/${agronomists.data.id}/photos`, { uploadIds: [later.data.id] })
+    expect(notMine.status).toBe(403)
+    expect(notMine.data.message).toBe('Only the author of the check, the owner or an agronomist can add photos to it')
+    expect((await operator.get(`/api/checks/${agronomists.data.id}`)).data.photoUploadIds).toEqual([])
+    const auditCount = async () => (await sql<{ n: number }>(`select count(*)::int as n from audit_log where entity = 'field_check' and entity_id = $1`, [checkId]))[0]!.n
+    const before = await auditCount()
+    const forbidden = await (await farm.as('foreman')).post(`/api/checks/${checkId}/photos`, { uploadIds: [third.data.id] })
+    expect(forbidden.status).toBe(403)
+    const csv = await sendFile(operator, 'spacing\n6\n', 'run.csv')
+    const stranger = await (await createFarm()).as('owner')
+    const theirs = await sendFile(stranger, png, 'theirs.png')
+    const refusals: [unknown, string, string][] = [
+      [{ uploadIds: [csv.data.id] }, 'uploadIds', 'Unknown file or wrong type'],
+      [{ uploadIds: [theirs.data.id] }, 'uploadIds', 'Unknown file or wrong type'],
+      [{ uploadIds: [] }, 'uploadIds', 'Choose at least one photo'],
+      [{ uploadIds: ['x'] }, 'uploadIds.0', 'Photo must be a record id'],
+      [{ uploadIds: [third.data.id], extra: 1 }, 'extra', ''],
+    ]
+    for (const [body, field, message] of refusals) {
+      const res = await operator.post(`/api/checks/${checkId}/photos`, body)
+      expect(res.status, JSON.stringify(body)).toBe(400)
+      expect(Object.keys(res.data.data.fields)).toContain(field)
+      if (message) expect(res.data.data.fields[field]).toBe(message)
+    }
+    // Ten photos at most on a check: it has 3, so 8 more are refused.
+    const more = []
+    for (let i = 0; i < 8; i++) more.push((await sendFile(operator, png, `more-${i}.png`)).data.id)
+    const full = await operator.post(`/api/checks/${checkId}/photos`, { uploadIds: more })
+    expect(full.status).toBe(400)
+    expect(full.data.data.fields.uploadIds).toBe('This check has 3; add at most 7')
+    expect((await stranger.post(`/api/checks/${checkId}/photos`, { uploadIds: [theirs.data.id] })).status).toBe(404)
+    expect((await operator.get(`/api/checks/${checkId}`)).data.photoUploadIds).toHaveLength(3)
+    expect(await auditCount()).toBe(before)
+  })
+})
+
 describe('uploads', () => {
   it('refuses a file over 10 MB with a 413 and stores nothing (by Content-Length and by the bytes read)', async () => {
     const c = await (await createFarm()).as('operator')

@@ -19,6 +19,13 @@ async function upload(farm: TestFarm) {
   return { id: u!.id }
 }
 
+// A check with no author (so only the owner and agronomists may add to it) and a photo of the farm.
+async function checkAndPhoto(farm: TestFarm) {
+  const c = await seedDropCheck(farm)
+  const [u] = await sql<{ id: number }>(`insert into uploads (farm_id, storage_key, content_type, size_bytes) values ($1::int, 'farm-' || $1::text || ':photo-' || floor(random() * 1e9)::text, 'image/png', 16) returning id`, [farm.farmId])
+  return { id: c.id, photo: u!.id }
+}
+
 export const CHECKS_ROUTES: Record<string, RouteRule> = {
   'POST /api/calc/spacing-quality': { roles: ALL, body: () => ({ spacingsIn: [5, 6, 7, 2, 12], theoreticalIn: 6 }) },
   'POST /api/calc/seed-check': { roles: ALL, body: () => ({ seedsCounted: 34, lengthFt: 17.424, rowSpacingIn: 30 }) },
@@ -28,6 +35,7 @@ export const CHECKS_ROUTES: Record<string, RouteRule> = {
   'POST /api/checks': { roles: TAKE, fixture: async (f) => ({ setup: (await equipment(f)).setup }), body: (ids) => ({ kind: 'stand-count', setupId: ids.setup, counts: [31, 33], lengthFt: 17.424 }) },
   'GET /api/checks/:id': { roles: ALL, fixture: seedDropCheck },
   'POST /api/checks/:id/review': { roles: REVIEW, fixture: seedDropCheck, body: () => ({ status: 'accepted', comment: 'Fine' }) },
+  'POST /api/checks/:id/photos': { roles: REVIEW, fixture: checkAndPhoto, body: (ids) => ({ uploadIds: [ids.photo] }) },
   'POST /api/checks/:id/apply-slip': { roles: ['owner', 'foreman'], fixture: seedDropCheck, body: () => ({}) },
   'POST /api/uploads': { roles: ALL, body: () => 'spacing\n6.1\n5.8\n' },
   'GET /api/uploads/:id': { roles: ALL, fixture: upload },

@@ -30,6 +30,15 @@ async function shopFarm(s48OnHand = 3): Promise<Ctx> {
   return { farm, foreman, planterId: planter.id, setupId: setup.data.id, c30, s48, config }
 }
 
+// The smallest file the server takes for a PNG photo: the 8-byte signature and a chunk header.
+const PNG_BYTES = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52])
+
+async function sendFile(c: Client, body: Uint8Array | string, kind = 'any') {
+  const res = await fetch(`${baseUrl()}/api/uploads?kind=${kind}`, { method: 'POST', headers: { cookie: c.cookie }, body: typeof body === 'string' ? body : new Blob([body as Uint8Array<ArrayBuffer>]) })
+  expect(res.status).toBe(201)
+  return (await res.json() as { id: number }).id
+}
+
 async function pdfText(c: Client, path: string) {
   const res = await fetch(`${baseUrl()}${path}`, { headers: { cookie: c.cookie } })
   expect(res.status).toBe(200)
@@ -150,6 +159,24 @@ describe('parts to pull and the install', () => {
     expect(audit!.n).toBe(1)
   })
 
+  it('moves the crop plans that approved the installed revision to "planter set", and no others', async () => {
+    const ctx = await shopFarm(4)
+    const [field] = await sql<{ id: number }>('insert into fields (farm_id, name, acres) values ($1, $2, 80) returning id', [ctx.farm.farmId, 'Install 80'])
+    const plan = async (status: string, approvedRevision: number | null) => (await sql<{ id: number }>(
+      `insert into crop_plans (farm_id, season, field_id, crop, target_stand, row_spacing_in, planter_id, setup_id, status, approved_revision)
+       values ($1, 2027, $2, 'soybeans', 130000, 30, $3, $4, $5, $6) returning id`, [ctx.farm.farmId, field!.id, ctx.planterId, ctx.setupId, status, approvedRevision]))[0]!.id
+    const approved = await plan('approved', 1)
+    const waiting = await plan('submitted', null)
+    const { planterConfigVersion } = (await ctx.foreman.get(`/api/setups/${ctx.setupId}/pick-list`)).data
+    const res = await ctx.foreman.post(`/api/setups/${ctx.setupId}/install`, { revision: 1, planterConfigVersion })
+    expect(res.status).toBe(200)
+    expect(res.data.plansSetUp).toEqual([approved])
+    const rows = await sql<{ id: number, status: string }>('select id, status from crop_plans where id = any($1) order by id', [[approved, waiting]])
+    expect(rows).toEqual([{ id: approved, status: 'set-up' }, { id: waiting, status: 'submitted' }])
+    const [event] = await sql<{ to: string, comment: string }>('select to_status as to, comment from plan_events where plan_id = $1', [approved])
+    expect(event).toEqual({ to: 'set-up', comment: 'Revision 1 was installed on the planter' })
+  })
+
   it('lets only the foreman and the owner mark a setup installed', async () => {
     const ctx = await shopFarm(4)
     const before = await counts(ctx)
@@ -192,7 +219,8 @@ describe('checklists, inspections and the work board', () => {
     expect(ins.items.map((i: { label: string }) => i.label)).toEqual(['Chains', 'Press wheels', 'Plates'])
     const [a, b, c] = ins.items as { id: number }[]
     await ctx.foreman.patch(`/api/inspection-items/${a!.id}`, { result: 'ok' })
-    await ctx.foreman.patch(`/api/inspection-items/${b!.id}`, { result: 'needs-fixing', notes: 'Row 3 bearing rough', photoUploadIds: [41] })
+    const photo = await sendFile(ctx.foreman, PNG_BYTES, 'photo')
+    expect((await ctx.foreman.patch(`/api/inspection-items/${b!.id}`, { result: 'needs-fixing', notes: 'Row 3 bearing rough', photoUploadIds: [photo] })).data.photoUploadIds).toEqual([photo])
     const early = await ctx.foreman.post(`/api/inspections/${ins.id}/complete`, {})
     expect(early.status).toBe(400)
     expect(early.data.data.fields['items.3']).toBe('Check “Plates”')
@@ -206,6 +234,8 @@ describe('checklists, inspections and the work board', () => {
     const board = (await ctx.foreman.get('/api/work-items?status=open')).data
     expect(board).toHaveLength(1)
     const w = board[0]
+    // The work item shows the photos of the item it came from.
+    expect(w.photoUploadIds).toEqual([photo])
     expect((await (await ctx.farm.as('agronomist')).patch(`/api/work-items/${w.id}`, { status: 'closed' })).status).toBe(403)
     expect((await ctx.foreman.patch(`/api/work-items/${w.id}`, { status: 'in-progress' })).data.status).toBe('in-progress')
     const closed = (await ctx.foreman.patch(`/api/work-items/${w.id}`, { status: 'closed' })).data
@@ -214,6 +244,52 @@ describe('checklists, inspections and the work board', () => {
     const other = await (await createFarm()).as('owner')
     expect((await other.get(`/api/inspections/${ins.id}`)).status).toBe(404)
     expect((await other.patch(`/api/work-items/${w.id}`, { status: 'open' })).status).toBe(404)
+  })
+})
+
+describe('photos on inspection items', () => {
+  it('links only this farm\'s photos, keeps each once, removes one and changes nothing on a refusal', async () => {
+    const ctx = await shopFarm()
+    const ins = (await ctx.foreman.post('/api/inspections', { planterId: ctx.planterId })).data
+    const item = ins.items[0] as { id: number }
+    const operator = await ctx.farm.as('operator')
+    const p1 = await sendFile(operator, PNG_BYTES, 'photo')
+    const p2 = await sendFile(ctx.foreman, PNG_BYTES, 'photo')
+    const csv = await sendFile(ctx.foreman, 'spacing\n6\n', 'csv')
+    const stranger = await (await createFarm()).as('foreman')
+    const theirs = await sendFile(stranger, PNG_BYTES, 'photo')
+
+    const both = await operator.patch(`/api/inspection-items/${item.id}`, { photoUploadIds: [p1, p2, p1] })
+    expect(both.status).toBe(200)
+    expect(both.data.photoUploadIds).toEqual([p1, p2])
+    const auditBefore = (await sql<{ n: number }>(`select count(*)::int as n from audit_log where entity = 'inspection_item' and entity_id = $1`, [item.id]))[0]!.n
+    expect(auditBefore).toBe(1)
+
+    for (const bad of [[p1, theirs], [csv], [p1, 2_000_000_000]]) {
+      const res = await ctx.foreman.patch(`/api/inspection-items/${item.id}`, { photoUploadIds: bad, notes: 'should not be saved' })
+      expect(res.status).toBe(400)
+      expect(res.data.data.fields.photoUploadIds).toBe('Unknown file or wrong type')
+    }
+    const tooMany = await ctx.foreman.patch(`/api/inspection-items/${item.id}`, { photoUploadIds: Array.from({ length: 11 }, () => p1) })
+    expect(tooMany.status).toBe(400)
+    expect(tooMany.data.data.fields.photoUploadIds).toBe('At most 10 photos')
+    const [kept] = await sql<{ photo_upload_ids: number[], notes: string | null }>('select photo_upload_ids, notes from inspection_items where id = $1', [item.id])
+    expect(kept).toEqual({ photo_upload_ids: [p1, p2], notes: null })
+    expect((await sql<{ n: number }>(`select count(*)::int as n from audit_log where entity = 'inspection_item' and entity_id = $1`, [item.id]))[0]!.n).toBe(1)
+
+    // Served to members of the farm only, with the type found in the bytes.
+    const served = await fetch(`${baseUrl()}/api/uploads/${p2}`, { headers: { cookie: operator.cookie } })
+    expect(served.status).toBe(200)
+    expect(served.headers.get('content-type')).toBe('image/png')
+    expect(new Uint8Array(await served.arrayBuffer())).toEqual(PNG_BYTES)
+    expect((await stranger.get(`/api/uploads/${p2}`)).status).toBe(404)
+    expect((await stranger.patch(`/api/inspection-items/${item.id}`, { photoUploadIds: [theirs] })).status).toBe(404)
+
+    const removed = await ctx.foreman.patch(`/api/inspection-items/${item.id}`, { photoUploadIds: [p2] })
+    expect(removed.data.photoUploadIds).toEqual([p2])
+    const [audit] = await sql<{ before: { photoUploadIds: number[] }, after: { photoUploadIds: number[] } }>(`select before, after from audit_log where entity = 'inspection_item' and entity_id = $1 order by id desc limit 1`, [item.id])
+    expect([audit!.before.photoUploadIds, audit!.after.photoUploadIds]).toEqual([[p1, p2], [p2]])
+    expect((await (await ctx.farm.as('agronomist')).patch(`/api/inspection-items/${item.id}`, { photoUploadIds: [] })).status).toBe(403)
   })
 })
 

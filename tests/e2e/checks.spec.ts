@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test'
-import { signIn } from './helpers'
+import { pngFixture, signIn } from './helpers'
 
 // A phone held in the field.
 test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true })
@@ -24,6 +24,13 @@ test('an operator on a phone enters a stand count and a spacing run and sees the
   await expect(page.getByRole('heading', { name: /Stand count/ })).toBeVisible()
   await expect(page.getByTestId('stand-result')).toContainText('32,000 /ac')
   await expect(page.getByTestId('replant-aid')).toContainText('The agronomist decides')
+  // A photo of the gap in the stand, added to the saved check from the phone's camera.
+  await expect(page.getByTestId('photo-count')).toHaveText('(0)')
+  await page.getByLabel('Add photos to this check').setInputFiles({ name: 'gap.png', mimeType: 'image/png', buffer: pngFixture([90, 140, 60]) })
+  await expect(page.getByTestId('photo-count')).toHaveText('(1)')
+  const photo = page.getByRole('img', { name: 'Photo 1 of the check' })
+  await expect(photo).toBeVisible()
+  await expect.poll(() => photo.evaluate((img: HTMLImageElement) => img.naturalWidth)).toBe(8)
 
   await page.goto('/checks')
   await page.getByLabel('Setup on the planter').selectOption({ label: 'North 12 · corn 34k · river bottoms (North 12)' })

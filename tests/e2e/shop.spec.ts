@@ -1,7 +1,7 @@
 import { readFile } from 'node:fs/promises'
 import { expect, test } from '@playwright/test'
 import { PDFParse } from 'pdf-parse'
-import { signIn } from './helpers'
+import { pngFixture, signIn } from './helpers'
 
 test('the foreman downloads a setup sheet, marks the setup installed and inspects the planter with one item to fix', async ({ page }) => {
   await signIn(page, 'foreman')
@@ -44,8 +44,21 @@ test('the foreman downloads a setup sheet, marks the setup installed and inspect
     await expect(choice).toHaveAttribute('aria-checked', 'true')
     if (i === 3) {
       await item.getByRole('textbox').fill('Drive tire at 24 psi; reseat the valve stem.')
+      // Two photos from the phone's camera; the second is taken again by mistake and removed.
+      const camera = item.getByLabel('Add photo to “Drive tire pressure”')
+      await expect(camera).toHaveAttribute('capture', 'environment')
+      await camera.setInputFiles({ name: 'valve-stem.png', mimeType: 'image/png', buffer: pngFixture([20, 120, 110]) })
+      const first = item.getByRole('img', { name: 'Photo 1 of “Drive tire pressure”' })
+      await expect(first).toBeVisible()
+      await expect.poll(() => first.evaluate((img: HTMLImageElement) => img.naturalWidth)).toBe(8)
+      await camera.setInputFiles({ name: 'again.png', mimeType: 'image/png', buffer: pngFixture([200, 200, 200]) })
+      await expect(item.getByRole('img', { name: 'Photo 2 of “Drive tire pressure”' })).toBeVisible()
+      await item.getByRole('button', { name: 'Remove photo 2 of “Drive tire pressure”' }).click()
+      await expect(item.getByRole('img', { name: /Photo \d of “Drive tire pressure”/ })).toHaveCount(1)
     }
   }
+  await page.reload()
+  await expect(page.locator('[data-item="3"]').getByRole('img', { name: 'Photo 1 of “Drive tire pressure”' })).toBeVisible()
   await expect(page.getByTestId('progress')).toHaveText('13 of 13 checked')
   await page.getByRole('button', { name: 'Complete the inspection' }).click()
   await expect(page.getByTestId('completed')).toBeVisible()
@@ -54,4 +67,7 @@ test('the foreman downloads a setup sheet, marks the setup installed and inspect
   const todo = page.locator('[data-column="open"]')
   await expect(todo).toContainText('Drive: Drive tire pressure')
   await expect(todo).toContainText('Drive tire at 24 psi; reseat the valve stem.')
+  const boardPhoto = todo.getByRole('img', { name: 'Photo 1 of “Drive: Drive tire pressure”' })
+  await expect(boardPhoto).toBeVisible()
+  await expect.poll(() => boardPhoto.evaluate((img: HTMLImageElement) => img.naturalWidth)).toBe(8)
 })
