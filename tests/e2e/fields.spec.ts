@@ -62,7 +62,10 @@ test('the foreman counts seed units but cannot edit lots; the unit weight shows'
   await expect(page.getByRole('button', { name: /Edit lot/ })).toHaveCount(0)
   const units = page.getByLabel('Units on hand of lot ML-28-0417')
   await units.fill('176')
+  // Wait for the save before reloading; a reload that races the PATCH reads the old count.
+  const saved = page.waitForResponse((r) => r.url().includes('/api/seed-lots/') && r.request().method() === 'PATCH')
   await units.blur()
+  await saved
   await page.reload()
   await expect(page.getByLabel('Units on hand of lot ML-28-0417')).toHaveValue('176')
 })
