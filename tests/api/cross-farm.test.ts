@@ -166,7 +166,7 @@ const CASES: Record<string, Case> = {
       const id = await check(a, ea.setup)
       const mine = await upload(await a.as('operator'), png, 'mine.png')
       const theirs = await upload(await b.as('operator'), png, 'theirs.png')
-      return { method: 'POST', path: `/api/checks/${id}/photos`, foreign: { uploadIds: [theirs] }, own: { uploadIds: [mine] }, watch: [['field_checks', id], ['uploads', theirs]] }
+      return { method: 'POST', path: `/api/checks/${id}/photos`, foreign: { uploadIds: [mine, theirs] }, own: { uploadIds: [mine] }, watch: [['field_checks', id], ['uploads', theirs]] }
     },
   },
   'POST /api/plans with another farm\'s fieldId': {
@@ -371,7 +371,7 @@ const CASES: Record<string, Case> = {
       const { item } = await inspectionItem(a, ea.planter)
       const mine = await upload(await a.as('operator'), png, 'mine.png')
       const theirs = await upload(await b.as('operator'), png, 'theirs.png')
-      return { method: 'PATCH', path: `/api/inspection-items/${item}`, foreign: { result: 'ok', photoUploadIds: [theirs] }, own: { result: 'ok', photoUploadIds: [mine] }, watch: [['inspection_items', item], ['uploads', theirs]] }
+      return { method: 'PATCH', path: `/api/inspection-items/${item}`, foreign: { result: 'ok', photoUploadIds: [mine, theirs] }, own: { result: 'ok', photoUploadIds: [mine] }, watch: [['inspection_items', item], ['uploads', theirs]] }
     },
   },
   'PATCH /api/work-items/:id assigned to another farm\'s user': {
@@ -427,6 +427,7 @@ describe('ids of another farm in a write\'s body', () => {
     const said = `${res.status} ${JSON.stringify(res.data).slice(0, 300)}`
     if (c.field) {
       expect(res.status, said).toBe(400)
+      expect(res.data.message, said).toMatch(/\w/)
       expect(res.data.data?.fields?.[c.field], `message for ${c.field}: ${said}`).toMatch(/\w/)
     } else {
       expect(res.status, said).toBe(c.status ?? 404)
@@ -456,7 +457,8 @@ describe('install of a revision that names another farm\'s plate', () => {
     const before = await snapshot(watch)
     const foreman = await a.as('foreman')
     const res = await foreman.post(`/api/setups/${ea.setup}/install`, { revision: 2, planterConfigVersion: 1 })
-    expect([400, 404, 409], `${res.status} ${JSON.stringify(res.data)}`).toContain(res.status)
+    expect(res.status, JSON.stringify(res.data)).toBe(409)
+    expect(res.data.message).toMatch(/not in the inventory/)
     expect(await snapshot(watch)).toEqual(before)
     const units = await sql<{ n: number }>('select count(*)::int as n from row_units where seed_plate_id = $1', [eb.plate])
     expect(units[0]!.n).toBe(0)
@@ -464,6 +466,10 @@ describe('install of a revision that names another farm\'s plate', () => {
     const pick = await foreman.get(`/api/setups/${ea.setup}/pick-list?revision=2`)
     expect(pick.status).toBe(200)
     expect(JSON.stringify(pick.data)).not.toContain(`"inventoryId":${eb.plate}`)
+    // Revision 1 carries farm A's parts only and goes on.
+    const own = await foreman.post(`/api/setups/${ea.setup}/install`, { revision: 1, planterConfigVersion: 1 })
+    expect(own.status, JSON.stringify(own.data)).toBe(200)
+    expect(own.data.installedRevision).toBe(1)
   })
 })
 
