@@ -101,6 +101,8 @@ interface Prepared {
 }
 
 interface Case {
+  // The id field the case puts another farm's id in, when no 400 names it.
+  covers?: string
   role: Role
   // The field the 400 must name; null when the answer is a 404.
   field: string | null
@@ -398,7 +400,7 @@ const CASES: Record<string, Case> = {
     },
   },
   'POST /api/auth/switch-farm to a farm the user is not a member of': {
-    role: 'operator', field: null,
+    covers: 'farmId', role: 'operator', field: null,
     prepare: async (a, b) => {
       // A farm of A's operator's own, to switch to for the control.
       const [own] = await sql<{ id: number }>(`insert into farms (name) values ('Cross second farm') returning id`)
@@ -407,6 +409,18 @@ const CASES: Record<string, Case> = {
     },
   },
 }
+
+// Farm B's own owner sees each of these, so the filter would match if the farm were not applied.
+const LISTS: [string, (ids: { setup: number, planter: number, field: number, plan: number }) => string][] = [
+  ['GET /api/checks?setupId', (i) => `/api/checks?setupId=${i.setup}`],
+  ['GET /api/checks?fieldId', (i) => `/api/checks?fieldId=${i.field}`],
+  ['GET /api/checks?planId', (i) => `/api/checks?planId=${i.plan}`],
+  ['GET /api/plans?fieldId', (i) => `/api/plans?fieldId=${i.field}`],
+  ['GET /api/plans?planterId', (i) => `/api/plans?planterId=${i.planter}`],
+  ['GET /api/setups?planterId', (i) => `/api/setups?planterId=${i.planter}`],
+  ['GET /api/inspections?planterId', (i) => `/api/inspections?planterId=${i.planter}`],
+  ['GET /api/work-items?planterId', (i) => `/api/work-items?planterId=${i.planter}`],
+]
 
 describe('ids of another farm in a write\'s body', () => {
   let a: TestFarm
@@ -494,17 +508,6 @@ describe('reads with another farm\'s ids in the query', () => {
     reader = await a.as('owner')
   })
 
-  // Farm B's own owner sees each of these, so the filter would match if the farm were not applied.
-  const LISTS: [string, (ids: { setup: number, planter: number, field: number, plan: number }) => string][] = [
-    ['GET /api/checks?setupId', (i) => `/api/checks?setupId=${i.setup}`],
-    ['GET /api/checks?fieldId', (i) => `/api/checks?fieldId=${i.field}`],
-    ['GET /api/checks?planId', (i) => `/api/checks?planId=${i.plan}`],
-    ['GET /api/plans?fieldId', (i) => `/api/plans?fieldId=${i.field}`],
-    ['GET /api/plans?planterId', (i) => `/api/plans?planterId=${i.planter}`],
-    ['GET /api/setups?planterId', (i) => `/api/setups?planterId=${i.planter}`],
-    ['GET /api/inspections?planterId', (i) => `/api/inspections?planterId=${i.planter}`],
-    ['GET /api/work-items?planterId', (i) => `/api/work-items?planterId=${i.planter}`],
-  ]
 
   it.each(LISTS)('%s of another farm lists nothing of theirs', async (_name, path) => {
     const ids = { setup: eb.setup, planter: eb.planter, field: pb.field, plan: pb.id }
@@ -536,5 +539,26 @@ describe('reads with another farm\'s ids in the query', () => {
     const own = await reader.post(`/api/planters/${ea.planter}/solve`, { targetSeedsPerAcre: 34000, sectionId: ea.section })
     expect(own.status).toBe(200)
     expect(own.data.sectionId).toBe(ea.section)
+  })
+})
+
+// Every id field of a body or query schema has a case above, so a new one without a case fails here.
+describe('coverage of the id fields in shared/schemas', () => {
+  it('has a case for each', async () => {
+    const { readdir, readFile } = await import('node:fs/promises')
+    const dir = new URL('../../shared/schemas/', import.meta.url)
+    const found = new Set<string>()
+    for (const f of await readdir(dir)) {
+      const text = await readFile(new URL(f, dir), 'utf8')
+      for (const m of text.matchAll(/\b(\w+Ids?|assignedTo)\s*:/g)) found.add(m[1]!)
+    }
+    const covered = new Set<string>([
+      ...Object.values(CASES).flatMap((c) => c.covers ?? c.field?.split('.').pop() ?? []),
+      ...LISTS.map(([name]) => name.split('?')[1]!),
+      // The rate chart and solver reads below.
+      'plateId', 'sectionId',
+    ])
+    expect(found.size).toBeGreaterThan(10)
+    expect([...found].filter((k) => !covered.has(k)).sort()).toEqual([])
   })
 })
