@@ -97,13 +97,18 @@ export interface SpacingBin {
 }
 
 // Counts of spacing ÷ theoretical in bins binWidth wide from 0 to maxRatio, plus one open bin above.
+// The 0.5 and 1.5 class limits are tested exactly as spacingQuality tests them, so bins and indices agree.
 export function spacingHistogram(input: { spacingsIn: number[], theoreticalIn: number, binWidth?: number, maxRatio?: number }): SpacingBin[] {
   const width = input.binWidth ?? 0.1
   const closed = Math.round((input.maxRatio ?? 3) / width)
   const counts = new Array<number>(closed + 1).fill(0)
+  const limits = [0.5, 1.5]
+    .map((ratio) => ({ limitIn: ratio * input.theoreticalIn, bin: Math.round(ratio / width), exact: Math.abs(ratio / width - Math.round(ratio / width)) < 1e-9 }))
+    .filter((l) => l.exact && l.bin > 0 && l.bin <= closed)
   for (const x of input.spacingsIn) {
     // The small allowance keeps 0.3 ÷ 0.1 = 2.9999999999999996 in the bin ending at 0.3.
-    const i = Math.ceil(x / input.theoreticalIn / width - 1e-9) - 1
+    let i = Math.ceil(x / input.theoreticalIn / width - 1e-9) - 1
+    for (const l of limits) i = x <= l.limitIn ? Math.min(i, l.bin - 1) : Math.max(i, l.bin)
     counts[Math.min(Math.max(i, 0), closed)]!++
   }
   const n = input.spacingsIn.length
