@@ -9,6 +9,7 @@ import { seedDropSummary } from '../../shared/utils/seed-drop'
 import { cornYieldPercent, plantingDayOfYear } from '../../shared/utils/replant'
 import { computeCapacity, seedNeeds } from '../../shared/utils/planning'
 import { fitCatchTest } from '../../shared/utils/application'
+import { checkBoundary } from '../../shared/utils/boundary'
 
 const teeth = fc.integer({ min: 8, max: 60 })
 const meterInput = fc.record({
@@ -254,5 +255,37 @@ describe('planning properties', () => {
 describe('the square inches in an acre', () => {
   it('6,272,640 = 43,560 ft² × 144 in² per ft² (L. H. Bailey, Farm and Garden Rule-Book; computed)', () => {
     expect(43_560 * 144).toBe(SQ_IN_PER_ACRE)
+  })
+})
+
+describe('field outlines that would miscount acres', () => {
+  const ring = (d: number, lon = 0, lat = 0) => [[lon, lat], [lon + d, lat], [lon + d, lat + d], [lon, lat + d], [lon, lat]]
+  const message = (g: unknown) => {
+    const r = checkBoundary(g)
+    return r.ok ? `ok ${r.acres}` : r.message
+  }
+
+  it('rejects a hole outside the outer ring, which left the field at 0 acres', () => {
+    expect(message({ type: 'Polygon', coordinates: [ring(0.01), ring(0.01, 0.02, 0.02)] })).toMatch(/hole 1 lies outside the outer ring/)
+  })
+
+  it('rejects a hole inside another hole, which took its area twice', () => {
+    expect(message({ type: 'Polygon', coordinates: [ring(0.03), ring(0.01, 0.01, 0.01), ring(0.004, 0.012, 0.012)] })).toMatch(/holes 1 and 2 lie one inside the other/)
+  })
+
+  it('rejects parts of a MultiPolygon that overlap or repeat, which counted the ground twice', () => {
+    expect(message({ type: 'MultiPolygon', coordinates: [[ring(0.01)], [ring(0.01)]] })).toMatch(/Polygons 1 and 2 overlap/)
+    expect(message({ type: 'MultiPolygon', coordinates: [[ring(0.01)], [ring(0.01, 0.005, 0.005)]] })).toMatch(/Polygons 1 and 2 overlap/)
+    expect(message({ type: 'MultiPolygon', coordinates: [[ring(0.01)], [ring(0.002, 0.004, 0.004)]] })).toMatch(/Polygons 1 and 2 overlap/)
+  })
+
+  it('keeps parts that only share an edge, and an island in another part\'s hole, with their areas added', () => {
+    const side = checkBoundary({ type: 'MultiPolygon', coordinates: [[ring(0.01)], [ring(0.01, 0.01, 0)]] })
+    const one = checkBoundary({ type: 'Polygon', coordinates: [ring(0.01)] })
+    expect(side.ok && one.ok && side.areaM2 / one.areaM2).toBeCloseTo(2, 6)
+    const island = checkBoundary({ type: 'MultiPolygon', coordinates: [[ring(0.03), ring(0.01, 0.01, 0.01)], [ring(0.006, 0.012, 0.012)]] })
+    const lake = checkBoundary({ type: 'Polygon', coordinates: [ring(0.03), ring(0.01, 0.01, 0.01)] })
+    const isle = checkBoundary({ type: 'Polygon', coordinates: [ring(0.006, 0.012, 0.012)] })
+    expect(island.ok && lake.ok && isle.ok && island.areaM2).toBeCloseTo((lake.ok ? lake.areaM2 : 0) + (isle.ok ? isle.areaM2 : 0), 3)
   })
 })
