@@ -145,6 +145,8 @@ export function solveDrive(input: SolverInput): SolverChoice[] {
   // seeds/acre = perRatio × cells × R
   const perRatio = (SQ_IN_PER_ACRE * rolling * input.meterRatio) / (input.rowSpacingIn * input.wheelCircumferenceIn)
   const target = input.targetSeedsPerAcre ?? SQ_IN_PER_ACRE / (input.rowSpacingIn * input.targetSpacingIn!)
+  if (!(target > 0 && Number.isFinite(target))) throw new RangeError('Give a target population or spacing above 0')
+  if (!(limit >= 1)) return []
   const first = combine(input.stages.slice(0, split))
   const second = combine(input.stages.slice(split)).sort((a, b) => a.ratio - b.ratio)
   const ratios = Float64Array.from(second, (b) => b.ratio)

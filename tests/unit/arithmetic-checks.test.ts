@@ -289,3 +289,25 @@ describe('field outlines that would miscount acres', () => {
     expect(island.ok && lake.ok && isle.ok && island.areaM2).toBeCloseTo((lake.ok ? lake.areaM2 : 0) + (isle.ok ? isle.areaM2 : 0), 3)
   })
 })
+
+describe('solver edge cases', () => {
+  const input: SolverInput = {
+    rowSpacingIn: 30, wheelCircumferenceIn: 86.4, slipPercent: 3, meterRatio: 1, installedPlateId: 1,
+    stages: [{ position: 1, driverTeeth: 20, drivenTeeth: 20, driverOptions: [18, 22], drivenOptions: [] }],
+    plates: [{ id: 1, code: 'P1', cellsPerPlate: 30 }],
+  }
+
+  it('refuses a missing or zero target instead of ranking NaN errors', () => {
+    expect(() => solveDrive(input)).toThrow(/target population or spacing/)
+    expect(() => solveDrive({ ...input, targetSeedsPerAcre: 0 })).toThrow(/target population or spacing/)
+    expect(() => solveDrive({ ...input, targetSpacingIn: 0 })).toThrow(/target population or spacing/)
+  })
+
+  it('asked for no choices answers none instead of failing', () => {
+    expect(solveDrive({ ...input, targetSeedsPerAcre: 30_000, limit: 0 })).toEqual([])
+  })
+
+  it('with no plates on hand answers none', () => {
+    expect(solveDrive({ ...input, plates: [], installedPlateId: null, targetSeedsPerAcre: 30_000 })).toEqual([])
+  })
+})
