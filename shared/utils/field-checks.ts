@@ -128,6 +128,9 @@ export function cornYieldLossFromSpacingSd(input: { spacingSdIn: number }): { bu
 
 export interface SpacingCsvResult { values: number[], errors: { line: number, message: string }[] }
 
+// The same ceiling as a typed spacing; it also keeps out 1e400, which reads as Infinity.
+export const SPACING_CSV_MAX_IN = 1000
+
 const NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/
 
 const unquote = (cell: string) => {
@@ -139,7 +142,7 @@ const cells = (line: string, sep: string) => line.split(sep).map(unquote)
 // Spacings (in) from pasted text: one value per line, or the named column of a comma, semicolon or
 // tab separated table whose first line is the header. Without a column a first line that is not a
 // number is taken as a header. Blank lines are skipped; every other line that gives no spacing
-// above 0 is reported with its line number (1-based).
+// above 0 and up to SPACING_CSV_MAX_IN is reported with its line number (1-based).
 export function parseSpacingCsv(text: string, column?: string): SpacingCsvResult {
   const lines = text.split(/\r?\n/)
   const out: SpacingCsvResult = { values: [], errors: [] }
@@ -165,6 +168,7 @@ export function parseSpacingCsv(text: string, column?: string): SpacingCsvResult
     if (raw === undefined || raw === '') out.errors.push({ line: i + 1, message: 'No value in this line' })
     else if (!NUMBER.test(raw)) out.errors.push({ line: i + 1, message: `"${raw.slice(0, 40)}" is not a number` })
     else if (!(Number(raw) > 0)) out.errors.push({ line: i + 1, message: 'A spacing must be more than 0' })
+    else if (!(Number(raw) <= SPACING_CSV_MAX_IN)) out.errors.push({ line: i + 1, message: `A spacing must be at most ${SPACING_CSV_MAX_IN.toLocaleString('en-US')} in` })
     else out.values.push(Number(raw))
   }
   return out

@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import { computeMeter, impliedSlipPercent, rowLengthForFraction, seedingRateForStand, seedsPerAcreFromFoot, seedsPerFootFromRate, SQ_IN_PER_ACRE } from '../../shared/utils/meter'
 import { solveDrive, type SolverInput, type SolverStage } from '../../shared/utils/solver'
-import { seedCheckRate, spacingHistogram, spacingQuality, standCountSummary } from '../../shared/utils/field-checks'
+import { parseSpacingCsv, seedCheckRate, spacingHistogram, spacingQuality, standCountSummary } from '../../shared/utils/field-checks'
 import { seedDropSummary } from '../../shared/utils/seed-drop'
 import { cornYieldPercent, plantingDayOfYear } from '../../shared/utils/replant'
 import { computeCapacity, seedNeeds } from '../../shared/utils/planning'
@@ -309,5 +309,17 @@ describe('solver edge cases', () => {
 
   it('with no plates on hand answers none', () => {
     expect(solveDrive({ ...input, plates: [], installedPlateId: null, targetSeedsPerAcre: 30_000 })).toEqual([])
+  })
+})
+
+describe('spacing CSV values that would poison the indices', () => {
+  it('reports 1e400 (Infinity) and spacings above 1,000 in by line, the typed-spacing ceiling, instead of averaging them', () => {
+    const r = parseSpacingCsv('6\n1e400\n5000\n1000\n')
+    expect(r.values).toEqual([6, 1000])
+    expect(r.errors).toEqual([
+      { line: 2, message: 'A spacing must be at most 1,000 in' },
+      { line: 3, message: 'A spacing must be at most 1,000 in' },
+    ])
+    expect(Number.isFinite(spacingQuality({ spacingsIn: r.values, theoreticalIn: 6 }).meanIn)).toBe(true)
   })
 })
