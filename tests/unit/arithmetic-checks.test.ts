@@ -3,11 +3,11 @@
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import { computeMeter, impliedSlipPercent, rowLengthForFraction, seedingRateForStand, seedsPerAcreFromFoot, seedsPerFootFromRate, SQ_IN_PER_ACRE } from '../../shared/utils/meter'
-import { solveDrive, type SolverInput, type SolverStage } from '../../shared/utils/solver'
+import { rateChart, solveDrive, type SolverInput, type SolverStage } from '../../shared/utils/solver'
 import { parseSpacingCsv, seedCheckRate, spacingHistogram, spacingQuality, standCountSummary } from '../../shared/utils/field-checks'
 import { seedDropSummary } from '../../shared/utils/seed-drop'
 import { cornYieldPercent, plantingDayOfYear } from '../../shared/utils/replant'
-import { computeCapacity, seedNeeds } from '../../shared/utils/planning'
+import { computeCapacity, hopperCoverage, seedNeeds } from '../../shared/utils/planning'
 import { fitCatchTest } from '../../shared/utils/application'
 import { checkBoundary } from '../../shared/utils/boundary'
 
@@ -113,7 +113,16 @@ describe('solver against every combination (small exhaustive cases)', () => {
       expect(Math.abs(out[0]!.errorPercent)).toBeLessThanOrEqual(best + 1e-9)
       expect(out[0]!.partsToChange).toBe(fewest)
       expect(out.length).toBeLessThanOrEqual(a.limit)
-      for (const c of out) for (const v of [c.seedsPerAcre, c.seedSpacingIn, c.errorPercent]) expect(Number.isFinite(v)).toBe(true)
+      for (const c of out) {
+        for (const v of [c.seedsPerAcre, c.seedSpacingIn, c.errorPercent]) expect(Number.isFinite(v)).toBe(true)
+        // Each choice reads the same through the meter formula, and its swaps are its parts to change.
+        const m = computeMeter({ wheelCircumferenceIn: 86.4, slipPercent: a.slipPercent, stages: c.stages, meterRatio: 1, cellsPerPlate: c.cellsPerPlate, rowSpacingIn: 30 })
+        expect(m.seedsPerAcre / c.seedsPerAcre).toBeCloseTo(1, 12)
+        expect(c.errorPercent).toBeCloseTo((m.seedsPerAcre / a.target - 1) * 100, 9)
+        expect(c.swaps.length).toBe(c.partsToChange)
+      }
+      // Ranked by the size of the error.
+      for (let k = 1; k < out.length; k++) expect(Math.abs(out[k - 1]!.errorPercent)).toBeLessThanOrEqual(Math.abs(out[k]!.errorPercent) + 1e-9)
     }), { numRuns: 150 })
   })
 })
@@ -230,6 +239,15 @@ describe('planning properties', () => {
     }))
   })
 
+  it('a row hopper\'s distance × row width is the row-acres it covers, and rows × that the planter\'s (property)', () => {
+    fc.assert(fc.property(fc.double({ min: 1, max: 100, noNaN: true }), fc.integer({ min: 1000, max: 5000 }), fc.integer({ min: 10_000, max: 200_000 }), fc.double({ min: 5, max: 60, noNaN: true }), fc.integer({ min: 1, max: 48 }), (hopperLb, seedsPerLb, seedsPerAcre, rowSpacingIn, rows) => {
+      const h = hopperCoverage({ hopperLb, seedsPerLb, seedsPerAcre, rowSpacingIn, rows })
+      expect(h.distanceFt * (rowSpacingIn / 12) / 43_560 / h.rowAcresPerFill).toBeCloseTo(1, 12)
+      expect(h.rowAcresPerFill * seedsPerAcre / (hopperLb * seedsPerLb)).toBeCloseTo(1, 12)
+      expect(h.planterAcresPerFill! / (h.rowAcresPerFill * rows)).toBeCloseTo(1, 12)
+    }))
+  })
+
   it('seed units are the fewest whole units that hold the seed (property)', () => {
     fc.assert(fc.property(fc.integer({ min: 1000, max: 300_000 }), fc.double({ min: 0.1, max: 5000, noNaN: true }), fc.double({ min: 0, max: 20, noNaN: true }), fc.integer({ min: 1000, max: 200_000 }), (seedsPerAcre, acres, marginPercent, unitSeeds) => {
       const n = seedNeeds({ seedsPerAcre, acres, marginPercent, unitSeeds })
@@ -287,6 +305,22 @@ describe('field outlines that would miscount acres', () => {
     const lake = checkBoundary({ type: 'Polygon', coordinates: [ring(0.03), ring(0.01, 0.01, 0.01)] })
     const isle = checkBoundary({ type: 'Polygon', coordinates: [ring(0.006, 0.012, 0.012)] })
     expect(island.ok && lake.ok && isle.ok && island.areaM2).toBeCloseTo((lake.ok ? lake.areaM2 : 0) + (isle.ok ? isle.areaM2 : 0), 3)
+  })
+})
+
+describe('rate chart', () => {
+  it('every row reads the meter formula at each row spacing, and the population scales with 1 ÷ row spacing (property)', () => {
+    fc.assert(fc.property(fc.array(fc.integer({ min: 10, max: 30 }), { maxLength: 4 }), fc.integer({ min: 8, max: 60 }), fc.double({ min: 0, max: 50, noNaN: true }), (options, cellsPerPlate, slipPercent) => {
+      const stages: SolverStage[] = [{ position: 1, driverTeeth: 20, drivenTeeth: 20, driverOptions: options, drivenOptions: [] }]
+      const chart = rateChart({ wheelCircumferenceIn: 86.4, slipPercent, meterRatio: 1, stages, cellsPerPlate, rowSpacingsIn: [30, 15] })
+      expect(chart.rows.filter((r) => r.installed)).toHaveLength(1)
+      for (const r of chart.rows) {
+        const m = computeMeter({ wheelCircumferenceIn: 86.4, slipPercent, stages: r.stages, meterRatio: 1, cellsPerPlate, rowSpacingIn: 30 })
+        expect(r.byRowSpacing[0]!.seedsPerAcre / m.seedsPerAcre).toBeCloseTo(1, 12)
+        expect(r.byRowSpacing[1]!.seedsPerAcre / r.byRowSpacing[0]!.seedsPerAcre).toBeCloseTo(2, 12)
+        expect(r.byRowSpacing[0]!.seedsPerAcre * r.seedSpacingIn * 30).toBeCloseTo(SQ_IN_PER_ACRE, 3)
+      }
+    }))
   })
 })
 
