@@ -4,7 +4,8 @@ import { computeMeter, rowLengthForFraction } from './meter'
 
 // Results of a whole setup: the meter formula per drive section, and the planter's population as
 // the mean over the planting rows (each row weighs the same). The page previews with this and the
-// server stores what it returns.
+// server stores what it returns. It warns beyond 5 % from the target: a rule of thumb (common
+// practice, no source).
 export function computeSetupResults(config: SetupConfig, plateRpmLimit?: number): SetupResults {
   const warnings: string[] = []
   const planting = new Set(config.rowUnits.filter((u) => u.planting).map((u) => u.position))
