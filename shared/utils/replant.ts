@@ -108,11 +108,13 @@ export function replantDecision(input: ReplantInput): ReplantResult {
   }
 }
 
+// The verdict follows the amount it shows: under half a cent either way is even, not "$0.00 ahead".
 function replantAdvice(net: Decimal, extrapolated: boolean): string {
-  const dollars = `$${net.abs().toFixed(2)}`
-  const verdict = net.gt(0)
+  const cents = net.toDecimalPlaces(2, Decimal.ROUND_HALF_UP)
+  const dollars = `$${cents.abs().toFixed(2)}`
+  const verdict = cents.gt(0)
     ? `Replanting comes out about ${dollars} per acre ahead of keeping the stand, after its cost.`
-    : net.lt(0)
+    : cents.lt(0)
       ? `Keeping the stand comes out about ${dollars} per acre ahead of replanting, after the replant cost.`
       : 'Replanting and keeping the stand come out even.'
   const edge = extrapolated ? ' A stand or date lies outside the table, so the nearest table value was used.' : ''

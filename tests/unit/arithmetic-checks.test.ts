@@ -6,7 +6,7 @@ import { computeMeter, impliedSlipPercent, rowLengthForFraction, seedingRateForS
 import { rateChart, solveDrive, type SolverInput, type SolverStage } from '../../shared/utils/solver'
 import { parseSpacingCsv, seedCheckRate, spacingHistogram, spacingQuality, standCountSummary } from '../../shared/utils/field-checks'
 import { seedDropSummary } from '../../shared/utils/seed-drop'
-import { cornYieldPercent, plantingDayOfYear } from '../../shared/utils/replant'
+import { cornYieldPercent, plantingDayOfYear, replantDecision } from '../../shared/utils/replant'
 import { computeCapacity, hopperCoverage, seedNeeds } from '../../shared/utils/planning'
 import { fitCatchTest } from '../../shared/utils/application'
 import { checkBoundary } from '../../shared/utils/boundary'
@@ -355,5 +355,17 @@ describe('spacing CSV values that would poison the indices', () => {
       { line: 3, message: 'A spacing must be at most 1,000 in' },
     ])
     expect(Number.isFinite(spacingQuality({ spacingsIn: r.values, theoreticalIn: 6 }).meanIn)).toBe(true)
+  })
+})
+
+describe('replant advice wording', () => {
+  // 16,000 kept from May 1 and 32,000 replanted May 29: 74 % against 90 % (PM 1885); 200 bu at $4.50 gives $144 (computed).
+  const base = { currentStand: 16_000, currentPlantingDate: '2026-05-01', replantStand: 32_000, replantDate: '2026-05-29', expectedYieldBuPerAcre: 200, pricePerBu: 4.5 }
+
+  it('calls a net under half a cent even instead of "$0.00 ahead"', () => {
+    expect(replantDecision({ ...base, replantCostPerAcre: 143.996 }).advice).toMatch(/^Replanting and keeping the stand come out even\./)
+    expect(replantDecision({ ...base, replantCostPerAcre: 144.004 }).advice).toMatch(/^Replanting and keeping the stand come out even\./)
+    expect(replantDecision({ ...base, replantCostPerAcre: 143.99 }).advice).toMatch(/^Replanting comes out about \$0\.01 per acre ahead/)
+    expect(replantDecision({ ...base, replantCostPerAcre: 144.01 }).advice).toMatch(/^Keeping the stand comes out about \$0\.01 per acre ahead/)
   })
 })
