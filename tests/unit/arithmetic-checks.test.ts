@@ -10,6 +10,8 @@ import { cornYieldPercent, plantingDayOfYear, replantDecision } from '../../shar
 import { computeCapacity, hopperCoverage, seedNeeds } from '../../shared/utils/planning'
 import { fitCatchTest } from '../../shared/utils/application'
 import { checkBoundary } from '../../shared/utils/boundary'
+import { computeSetupResults } from '../../shared/utils/setup-results'
+import type { SetupConfig } from '../../shared/types/setup'
 
 const teeth = fc.integer({ min: 8, max: 60 })
 const meterInput = fc.record({
@@ -367,5 +369,21 @@ describe('replant advice wording', () => {
     expect(replantDecision({ ...base, replantCostPerAcre: 144.004 }).advice).toMatch(/^Replanting and keeping the stand come out even\./)
     expect(replantDecision({ ...base, replantCostPerAcre: 143.99 }).advice).toMatch(/^Replanting comes out about \$0\.01 per acre ahead/)
     expect(replantDecision({ ...base, replantCostPerAcre: 144.01 }).advice).toMatch(/^Keeping the stand comes out about \$0\.01 per acre ahead/)
+  })
+})
+
+describe('setup results with every row shut off', () => {
+  it('says so instead of presenting the population as planted', () => {
+    const rowUnits = [1, 2].map((position) => ({
+      position, opener: 'double-disc', gaugeWheels: null, depthIn: 1.75, depthBand: null, downPressureLb: null, pressWheel: 'open-center', pressWheelWidthIn: null,
+      covering: 'none', furrower: false, seedPlateId: null, granular: 'none', granularBandWidthIn: null, granularDialSetting: null, fertilizerSetting: null, planting: false,
+    })) as SetupConfig['rowUnits']
+    // 60 in wheel, 1:1, 10 cells → 6 in in 30 in rows → 34,848 seeds/acre (computed).
+    const r = computeSetupResults({
+      crop: 'corn', targetSeedsPerAcre: 34_848, rowSpacingIn: 30, speedMph: null, wheelCircumferenceIn: 60, slipPercent: 0, meterRatio: 1,
+      sections: [{ sectionId: null, name: 'Main', rows: [1, 2], seedPlateId: null, plateCode: null, cellsPerPlate: 10, stages: [{ position: 1, driverTeeth: 20, drivenTeeth: 20 }] }], rowUnits,
+    })
+    expect(r.seedsPerAcre).toBeCloseTo(34_848, 6)
+    expect(r.warnings).toEqual(['No row is set to plant; the population is what the drive sections would drop with their rows turned on.'])
   })
 })
