@@ -199,6 +199,7 @@ export async function addComment(member: Member, setupId: number, body: z.infer<
   return useDb().transaction(async (tx) => {
     const [setup] = await tx.select().from(setups).where(and(eq(setups.id, setupId), eq(setups.farmId, member.farmId)))
     if (!setup) notFound('Setup')
+    if (body.revision && body.revision > setup.latestRevision) badRequest('There is no such revision', { revision: `This setup has revisions 1 to ${setup.latestRevision}` })
     const [c] = await tx.insert(setupComments).values({ setupId, revision: body.revision ?? setup.latestRevision, userId: member.user.id, body: body.body }).returning()
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'comment', entity: 'setup', entityId: setupId, after: c })
     return { ...c!, authorName: member.user.name }

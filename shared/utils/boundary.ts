@@ -57,6 +57,30 @@ function checkRing(ring: unknown, label: string): { ring?: Position[], error?: s
   return { ring: out }
 }
 
+// Where a position lies against a ring in plain lon/lat (crossing number; field-sized rings, so no
+// curvature to speak of): inside, on an edge or corner, or outside.
+function sideOf(p: Position, ring: Position[]): 'in' | 'on' | 'out' {
+  let inside = false
+  for (let i = 0, j = ring.length - 2; i < ring.length - 1; j = i++) {
+    const [xi, yi] = ring[i]!
+    const [xj, yj] = ring[j]!
+    const cross = (xj - xi) * (p[1] - yi) - (yj - yi) * (p[0] - xi)
+    if (cross === 0 && p[0] >= Math.min(xi, xj) && p[0] <= Math.max(xi, xj) && p[1] >= Math.min(yi, yj) && p[1] <= Math.max(yi, yj)) return 'on'
+    if ((yi > p[1]) !== (yj > p[1]) && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside
+  }
+  return inside ? 'in' : 'out'
+}
+
+// Rings that do not cross lie wholly inside or outside each other, so one corner not on the other
+// ring tells which; a ring with every corner on the other is the same ring.
+function ringInside(ring: Position[], other: Position[]): boolean {
+  for (const p of ring) {
+    const side = sideOf(p, other)
+    if (side !== 'on') return side === 'in'
+  }
+  return true
+}
+
 function checkPolygon(rings: unknown, label: string): { rings?: Position[][], error?: string } {
   if (!Array.isArray(rings) || rings.length === 0) return { error: `${label} has no rings` }
   const out: Position[][] = []
@@ -69,6 +93,13 @@ function checkPolygon(rings: unknown, label: string): { rings?: Position[][], er
   if (crossings.length) {
     const [lon, lat] = crossings[0]!.geometry.coordinates
     return { error: `${label} crosses itself near ${lat!.toFixed(6)}, ${lon!.toFixed(6)} (latitude, longitude); redraw it so its edges do not cross` }
+  }
+  // A hole outside the outline, or inside another hole, would take area the field does not have.
+  for (let h = 1; h < out.length; h++) {
+    if (!ringInside(out[h]!, out[0]!)) return { error: `${label}, hole ${h} lies outside the outer ring` }
+    for (let g = 1; g < h; g++) {
+      if (ringInside(out[h]!, out[g]!) || ringInside(out[g]!, out[h]!)) return { error: `${label}, holes ${g} and ${h} lie one inside the other` }
+    }
   }
   return { rings: out }
 }
@@ -94,6 +125,10 @@ export function checkBoundary(input: unknown): BoundaryResult {
     for (let i = 0; i < coords.length; i++) {
       const res = checkPolygon(coords[i], `Polygon ${i + 1}`)
       if (res.error) return fail(res.error)
+      // Parts that overlap would count the shared ground twice; an island in another part's hole is fine.
+      const within = (a: Position[][], b: Position[][]) => ringInside(a[0]!, b[0]!) && !b.slice(1).some((hole) => ringInside(a[0]!, hole))
+      const j = polys.findIndex((q) => within(res.rings!, q) || within(q, res.rings!))
+      if (j >= 0) return fail(`Polygons ${j + 1} and ${i + 1} overlap; draw each piece of ground once`)
       polys.push(res.rings!)
     }
     normal = { type: 'MultiPolygon', coordinates: polys }

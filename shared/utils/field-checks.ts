@@ -97,13 +97,18 @@ export interface SpacingBin {
 }
 
 // Counts of spacing ÷ theoretical in bins binWidth wide from 0 to maxRatio, plus one open bin above.
+// The 0.5 and 1.5 class limits are tested exactly as spacingQuality tests them, so bins and indices agree.
 export function spacingHistogram(input: { spacingsIn: number[], theoreticalIn: number, binWidth?: number, maxRatio?: number }): SpacingBin[] {
   const width = input.binWidth ?? 0.1
   const closed = Math.round((input.maxRatio ?? 3) / width)
   const counts = new Array<number>(closed + 1).fill(0)
+  const limits = [0.5, 1.5]
+    .map((ratio) => ({ limitIn: ratio * input.theoreticalIn, bin: Math.round(ratio / width), exact: Math.abs(ratio / width - Math.round(ratio / width)) < 1e-9 }))
+    .filter((l) => l.exact && l.bin > 0 && l.bin <= closed)
   for (const x of input.spacingsIn) {
     // The small allowance keeps 0.3 ÷ 0.1 = 2.9999999999999996 in the bin ending at 0.3.
-    const i = Math.ceil(x / input.theoreticalIn / width - 1e-9) - 1
+    let i = Math.ceil(x / input.theoreticalIn / width - 1e-9) - 1
+    for (const l of limits) i = x <= l.limitIn ? Math.min(i, l.bin - 1) : Math.max(i, l.bin)
     counts[Math.min(Math.max(i, 0), closed)]!++
   }
   const n = input.spacingsIn.length
@@ -123,6 +128,9 @@ export function cornYieldLossFromSpacingSd(input: { spacingSdIn: number }): { bu
 
 export interface SpacingCsvResult { values: number[], errors: { line: number, message: string }[] }
 
+// The same ceiling as a typed spacing; it also keeps out 1e400, which reads as Infinity.
+export const SPACING_CSV_MAX_IN = 1000
+
 const NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/
 
 const unquote = (cell: string) => {
@@ -134,7 +142,7 @@ const cells = (line: string, sep: string) => line.split(sep).map(unquote)
 // Spacings (in) from pasted text: one value per line, or the named column of a comma, semicolon or
 // tab separated table whose first line is the header. Without a column a first line that is not a
 // number is taken as a header. Blank lines are skipped; every other line that gives no spacing
-// above 0 is reported with its line number (1-based).
+// above 0 and up to SPACING_CSV_MAX_IN is reported with its line number (1-based).
 export function parseSpacingCsv(text: string, column?: string): SpacingCsvResult {
   const lines = text.split(/\r?\n/)
   const out: SpacingCsvResult = { values: [], errors: [] }
@@ -160,6 +168,7 @@ export function parseSpacingCsv(text: string, column?: string): SpacingCsvResult
     if (raw === undefined || raw === '') out.errors.push({ line: i + 1, message: 'No value in this line' })
     else if (!NUMBER.test(raw)) out.errors.push({ line: i + 1, message: `"${raw.slice(0, 40)}" is not a number` })
     else if (!(Number(raw) > 0)) out.errors.push({ line: i + 1, message: 'A spacing must be more than 0' })
+    else if (!(Number(raw) <= SPACING_CSV_MAX_IN)) out.errors.push({ line: i + 1, message: `A spacing must be at most ${SPACING_CSV_MAX_IN.toLocaleString('en-US')} in` })
     else out.values.push(Number(raw))
   }
   return out

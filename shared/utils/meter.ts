@@ -41,7 +41,9 @@ export function driveRatio(stages: DriveStageTeeth[], meterRatio: number): Decim
 
 // spacing (in) = circumference ÷ (cells × R × (1 − slip/100)); seeds/acre = 6,272,640 ÷ (row in × spacing in).
 // Slip means the planter travels farther than the wheel rolls, so it widens the spacing.
+// At 100 % slip (or more) the wheel never turns the drive, so no spacing exists: refused, not Infinity.
 export function computeMeter(input: MeterInput): MeterResult {
+  if (!(input.slipPercent < 100)) throw new RangeError('Slip must be below 100 %: at 100 % the drive wheel does not turn the meter')
   const r = driveRatio(input.stages, input.meterRatio)
   const seedsPerWheelRev = r.mul(input.cellsPerPlate)
   const rolling = new Decimal(1).minus(new Decimal(input.slipPercent).div(100))

@@ -21,10 +21,14 @@ const MONTH_DAYS = [31, 29, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31]
 // Day of the year (1–365, counted as in a year without Feb 29, which counts as Feb 28) from
 // "YYYY-MM-DD" or "MM-DD", so a date sits at the same place in the table every year.
 export function plantingDayOfYear(date: string): number {
-  const m = /^(?:\d{4}-)?(\d{1,2})-(\d{1,2})$/.exec(date.trim())
-  const month = m ? Number(m[1]) : NaN
-  const day = m ? Number(m[2]) : NaN
-  if (!(month >= 1 && month <= 12 && day >= 1 && day <= MONTH_DAYS[month - 1]!)) throw new RangeError(`"${date}" is not a date (use YYYY-MM-DD)`)
+  const m = /^(?:(\d{4})-)?(\d{1,2})-(\d{1,2})$/.exec(date.trim())
+  const year = m?.[1] === undefined ? null : Number(m[1])
+  const month = m ? Number(m[2]) : NaN
+  const day = m ? Number(m[3]) : NaN
+  // Feb 29 only in a leap year, or when no year is given.
+  const leap = year === null || (year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0))
+  const monthDays = month === 2 && !leap ? 28 : MONTH_DAYS[month - 1]!
+  if (!(month >= 1 && month <= 12 && day >= 1 && day <= monthDays)) throw new RangeError(`"${date}" is not a date (use YYYY-MM-DD)`)
   return MONTH_START[month - 1]! + Math.min(day, month === 2 ? 28 : 31)
 }
 
@@ -104,11 +108,13 @@ export function replantDecision(input: ReplantInput): ReplantResult {
   }
 }
 
+// The verdict follows the amount it shows: under half a cent either way is even, not "$0.00 ahead".
 function replantAdvice(net: Decimal, extrapolated: boolean): string {
-  const dollars = `$${net.abs().toFixed(2)}`
-  const verdict = net.gt(0)
+  const cents = net.toDecimalPlaces(2, Decimal.ROUND_HALF_UP)
+  const dollars = `$${cents.abs().toFixed(2)}`
+  const verdict = cents.gt(0)
     ? `Replanting comes out about ${dollars} per acre ahead of keeping the stand, after its cost.`
-    : net.lt(0)
+    : cents.lt(0)
       ? `Keeping the stand comes out about ${dollars} per acre ahead of replanting, after the replant cost.`
       : 'Replanting and keeping the stand come out even.'
   const edge = extrapolated ? ' A stand or date lies outside the table, so the nearest table value was used.' : ''

@@ -37,6 +37,7 @@ export interface SeedDropSummary {
 // the planter's slip, is asked for target × (1 − planter slip) ÷ ((1 − setup slip) × found ÷ setup rate),
 // the setting whose seed on the ground lands on the target.
 export function seedDropSummary(input: SeedDropInput): SeedDropSummary {
+  if (!input.rows.length) throw new RangeError('Count at least one row')
   const byTurns = input.wheelRevolutions !== undefined
   const lengthFt = byTurns ? new Decimal(input.wheelRevolutions!).mul(input.wheelCircumferenceIn).div(12).toNumber() : input.lengthFt!
   const rows = input.rows.map((r) => ({ ...r, lengthFt, seedsPerAcre: seedCheckRate({ seedsCounted: r.seedsCounted, lengthFt, rowSpacingIn: input.rowSpacingIn }).seedsPerAcre }))

@@ -4,7 +4,8 @@ import { computeMeter, rowLengthForFraction } from './meter'
 
 // Results of a whole setup: the meter formula per drive section, and the planter's population as
 // the mean over the planting rows (each row weighs the same). The page previews with this and the
-// server stores what it returns.
+// server stores what it returns. It warns beyond 5 % from the target: a rule of thumb (common
+// practice, no source).
 export function computeSetupResults(config: SetupConfig, plateRpmLimit?: number): SetupResults {
   const warnings: string[] = []
   const planting = new Set(config.rowUnits.filter((u) => u.planting).map((u) => u.position))
@@ -43,6 +44,8 @@ export function computeSetupResults(config: SetupConfig, plateRpmLimit?: number)
   const seedSpacingIn = seedsPerAcre.gt(0) ? new Decimal(6_272_640).div(seedsPerAcre.mul(config.rowSpacingIn)) : new Decimal(0)
   const errorPercent = seedsPerAcre.div(config.targetSeedsPerAcre).minus(1).mul(100)
   if (errorPercent.abs().gt(5)) warnings.push(`The computed population is ${errorPercent.toFixed(1)} % from the target.`)
+  // With every listed row shut off the figure above is what the rows would drop if turned on.
+  if (config.rowUnits.length && planting.size === 0) warnings.push('No row is set to plant; the population is what the drive sections would drop with their rows turned on.')
   const unassigned = config.rowUnits.filter((u) => u.planting && !config.sections.some((s) => s.rows.includes(u.position)))
   if (unassigned.length) warnings.push(`Rows ${unassigned.map((u) => u.position).join(', ')} plant but belong to no drive section.`)
   return {

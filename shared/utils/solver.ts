@@ -137,6 +137,7 @@ export function solverWork(input: Pick<SolverInput, 'stages' | 'plates'>): { wor
 // Floating point in the search; the returned choices are recomputed with the decimal meter formula.
 export function solveDrive(input: SolverInput): SolverChoice[] {
   const limit = input.limit ?? 10
+  if (!(input.slipPercent < 100)) throw new RangeError('Slip must be below 100 %: at 100 % the drive wheel does not turn the meter')
   const plates = input.plates.filter((p) => p.quantityOnHand === undefined || p.quantityOnHand > 0 || p.id === input.installedPlateId)
   const { work, split } = solverWork({ stages: input.stages, plates })
   if (work > SOLVER_MAX_WORK) throw new RangeError(`The drive has too many sprocket combinations to search (${Math.round(work).toLocaleString('en-US')} steps, limit ${SOLVER_MAX_WORK.toLocaleString('en-US')}): leave out some on-hand options or stages`)
@@ -144,6 +145,8 @@ export function solveDrive(input: SolverInput): SolverChoice[] {
   // seeds/acre = perRatio × cells × R
   const perRatio = (SQ_IN_PER_ACRE * rolling * input.meterRatio) / (input.rowSpacingIn * input.wheelCircumferenceIn)
   const target = input.targetSeedsPerAcre ?? SQ_IN_PER_ACRE / (input.rowSpacingIn * input.targetSpacingIn!)
+  if (!(target > 0 && Number.isFinite(target))) throw new RangeError('Give a target population or spacing above 0')
+  if (!(limit >= 1)) return []
   const first = combine(input.stages.slice(0, split))
   const second = combine(input.stages.slice(split)).sort((a, b) => a.ratio - b.ratio)
   const ratios = Float64Array.from(second, (b) => b.ratio)

@@ -52,7 +52,7 @@ describe('granular row and field rates', () => {
 })
 
 describe('catch courses', () => {
-  it('653 ft course: ounces per row = lb/acre × width ÷ 50 (University of Missouri Extension G1273, Fishel); 10 lb/acre at 40 in → 8 oz', () => {
+  it('653 ft course: ounces per row = lb/acre × width ÷ 50 (University of Missouri Extension G1273, Fishel); 10 lb/acre at 40 in → 8 oz (computed from the rule)', () => {
     expect(catchCourse653({ lbPerAcre: 10, rowWidthIn: 40 }).ounces).toBe(8)
     // The exact area of 653 ft × 40 in gives 10.006 lb/acre for those 8 oz (computed): the rule is within 0.1 %.
     expect(dryRateFromCatch({ ounces: 8, lengthFt: 653, widthIn: 40 }).lbPerAcre).toBeCloseTo(10.006, 3)

@@ -16,7 +16,7 @@ const plans: SeasonPlan[] = [
 ]
 
 describe('plan seed', () => {
-  it('seeding rate = target ÷ (germination × survival): 30,400 at 95 % and 100 % → 32,000 seeds/acre (Iowa State University, Agron 212 formula; figures computed)', () => {
+  it('seeding rate = target ÷ (germination × survival): 30,400 at 95 % and 100 % → 32,000 seeds/acre (Ohio State University, Thomison; figures computed)', () => {
     const s = planSeed(plans[0]!)
     expect(s.seedsPerAcre).toBeCloseTo(32_000, 9)
     // 32,000 × 100 ac × 1.03 = 3,296,000 seeds; ÷ 80,000 = 41.2 → 42 units; ÷ 1,600 seeds/lb = 2,060 lb.
