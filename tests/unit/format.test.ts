@@ -1,0 +1,35 @@
+import { describe, expect, it } from 'vitest'
+import { fmtDay, fmtInt, fmtLabel, fmtQty } from '../../shared/utils/format'
+
+// Display formatting only (no published source needed): en-US month names and separators.
+describe('fmtDay', () => {
+  it('reads a bare day as that calendar day in any time zone', () => {
+    expect(fmtDay('2027-05-12')).toBe('May 12, 2027')
+    expect(fmtDay('2026-01-01')).toBe('Jan 1, 2026')
+  })
+  it('shows a dash for no day and keeps text it cannot read', () => {
+    expect(fmtDay(null)).toBe('—')
+    expect(fmtDay('')).toBe('—')
+    expect(fmtDay('someday')).toBe('someday')
+  })
+})
+
+describe('fmtQty', () => {
+  it('keeps entered decimals up to the limit, with thousands separators', () => {
+    expect(fmtQty(6.5)).toBe('6.5')
+    expect(fmtQty(387)).toBe('387')
+    expect(fmtQty(1250.125)).toBe('1,250.13')
+    expect(fmtQty(null)).toBe('—')
+  })
+})
+
+describe('fmtLabel and fmtInt', () => {
+  it('capitalises a stored word and leaves the rest alone', () => {
+    expect(fmtLabel('pull-type')).toBe('Pull-type')
+    expect(fmtLabel('fine sandy loam')).toBe('Fine sandy loam')
+    expect(fmtLabel(null)).toBe('—')
+  })
+  it('rounds whole numbers with separators', () => {
+    expect(fmtInt(138963.4)).toBe('138,963')
+  })
+})
