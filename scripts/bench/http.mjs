@@ -17,6 +17,7 @@ try {
   const targets = [
     { route: 'GET /api/health', opts: { url: `${server.baseUrl}/api/health` } },
     { route: 'POST /api/calc/meter (signed in)', opts: { url: `${server.baseUrl}/api/calc/meter`, method: 'POST', body: meterBody, headers: { cookie, 'content-type': 'application/json' } } },
+    { route: 'GET /api/setups, 10 rows (signed in)', opts: { url: `${server.baseUrl}/api/setups?limit=10`, headers: { cookie } } },
     { route: 'GET /api/setups, 50 rows (signed in)', opts: { url: `${server.baseUrl}/api/setups?limit=50`, headers: { cookie } } },
   ]
   const samples = new Map(targets.map((t) => [t.route, []]))
