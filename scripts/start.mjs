@@ -13,6 +13,7 @@ const { sessionSecret } = await import('./lib/secret.mjs')
 const { startFakeSmtp } = await import('./lib/fake-smtp.mjs')
 const { createJiti } = await import('jiti')
 const { SLOT, suffix } = await import('./lib/slot.mjs')
+const { SERVER_NODE_ARGS } = await import('./lib/server-args.mjs')
 
 const host = process.env.HOST || '127.0.0.1'
 const port = Number(process.env.PORT || 3000 + SLOT * 10)
@@ -50,7 +51,7 @@ env.NUXT_UPLOAD_DIR ||= resolve(root, '.data/uploads')
 
 ensureBuild()
 
-const server = spawn(process.execPath, [resolve(root, '.output/server/index.mjs')], { env, stdio: ['ignore', 'inherit', 'inherit'] })
+const server = spawn(process.execPath, [...SERVER_NODE_ARGS, resolve(root, '.output/server/index.mjs')], { env, stdio: ['ignore', 'inherit', 'inherit'] })
 server.on('exit', (code) => process.exit(code ?? 0))
 for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, () => server.kill(sig))
 

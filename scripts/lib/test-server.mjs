@@ -8,6 +8,7 @@ import { root } from './deps.mjs'
 import { dbUp, ensureDatabase, localUrl } from './pg.mjs'
 import { runMigrations } from '../migrate.mjs'
 import { startFakeSmtp } from './fake-smtp.mjs'
+import { SERVER_NODE_ARGS } from './server-args.mjs'
 
 export const TEST_SESSION_SECRET = 'test-only-session-secret-0123456789abcdef'
 
@@ -54,7 +55,7 @@ export async function startTestServer({ database, port: wantPort, smtpPort: want
   const smtpServer = smtp ? await startFakeSmtp({ port: smtpPort, dir: mailbox }) : null
   const uploads = mkdtempSync(join(tmpdir(), 'rowbench-uploads-'))
   const baseUrl = `http://127.0.0.1:${port}`
-  const child = spawn(process.execPath, [...nodeArgs, resolve(root, '.output/server/index.mjs')], {
+  const child = spawn(process.execPath, [...SERVER_NODE_ARGS, ...nodeArgs, resolve(root, '.output/server/index.mjs')], {
     env: {
       ...process.env,
       DATABASE_URL: databaseUrl,
