@@ -303,13 +303,30 @@ export async function listComments(farmId: number, planId: number) {
 }
 
 export async function addPlanComment(member: Member, planId: number, body: { body: string }) {
-  return useDb().transaction(async (tx) => {
-    const [plan] = await tx.select({ id: cropPlans.id }).from(cropPlans).where(and(eq(cropPlans.id, planId), eq(cropPlans.farmId, member.farmId)))
+  const comment = await useDb().transaction(async (tx) => {
+    const [plan] = await tx.select({ id: cropPlans.id, proposedBy: cropPlans.proposedBy, crop: cropPlans.crop, season: cropPlans.season, fieldName: fields.name }).from(cropPlans)
+      .innerJoin(fields, eq(fields.id, cropPlans.fieldId))
+      .where(and(eq(cropPlans.id, planId), eq(cropPlans.farmId, member.farmId)))
     if (!plan) notFound('Plan')
     const [c] = await tx.insert(planComments).values({ planId, userId: member.user.id, body: body.body }).returning()
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'comment', entity: 'crop-plan', entityId: planId, after: c })
+    // The thread reaches those the plan concerns and everyone who has written in it, not the writer.
+    const writers = await tx.selectDistinct({ id: users.id, email: users.email, name: users.name }).from(planComments)
+      .innerJoin(users, eq(users.id, planComments.userId))
+      .innerJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.farmId, member.farmId)))
+      .where(eq(planComments.planId, planId))
+    const people = new Map([...await concerned(tx, member.farmId, plan.proposedBy, member.user.id), ...writers].filter((u) => u.id !== member.user.id).map((u) => [u.id, u]))
+    const what = `${plan.fieldName} (${plan.crop}, ${plan.season})`
+    await queueMail([...people.values()].map((u) => ({
+      farmId: member.farmId,
+      to: u.email,
+      subject: `Crop plan ${what}: a comment from ${member.user.name}`,
+      text: `Hello ${u.name},\n\n${member.user.name} wrote on the crop plan for ${what}:\n\n“${body.body}”\n\nOpen the plan: ${appUrl(`/plans/${planId}`)}\n`,
+    })), tx)
     return { ...c!, authorName: member.user.name }
   })
+  void flushOutbox()
+  return comment
 }
 
 export async function seasonSummary(farmId: number, season: number, opts: { hoursPerDay: number, efficiencyPercent: number }) {

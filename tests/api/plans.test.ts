@@ -182,6 +182,13 @@ describe('crop plans', () => {
     const thread = await foreman.get(`/api/plans/${plan.id}/comments`)
     expect(thread.data.items.map((c: { body: string }) => c.body)).toEqual(['Low spot on the east end', 'I will slow down there'])
     expect(thread.data.items[1].authorName).toContain('operator')
+    // Each comment is mailed to the others in the thread and to those the plan concerns, never to its writer.
+    const mailed = await sql<{ to: string, subject: string }>(`select "to", subject from outbox where subject like '%a comment from%' and text like $1 order by id`, [`%/plans/${plan.id}%`])
+    const fromOperator = mailed.filter((m) => m.subject.includes(`operator of ${farm.farmName}`)).map((m) => m.to).sort()
+    expect(fromOperator).toEqual([farm.users.agronomist.email, farm.users.owner.email].sort())
+    const fromAgronomist = mailed.filter((m) => m.subject.includes(`agronomist of ${farm.farmName}`)).map((m) => m.to)
+    expect(fromAgronomist).toContain(farm.users.owner.email)
+    expect(fromAgronomist).not.toContain(farm.users.agronomist.email)
   })
 
   it('answers 404 for another farm\'s plan and never touches it', async () => {
