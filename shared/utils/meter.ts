@@ -6,6 +6,8 @@ export const SQ_IN_PER_ACRE = 6_272_640
 export const SQ_FT_PER_ACRE = 43_560
 // 17.6 in/s for each mph.
 const IN_PER_S_PER_MPH = new Decimal(63_360).div(3600)
+const HUNDRED = new Decimal(100)
+const ONE = new Decimal(1)
 // Rule of thumb (common practice, no source): plate meters fill cells less reliably as the plate
 // speeds up; 35 rpm is a cautious default that the user can change.
 export const DEFAULT_PLATE_RPM_LIMIT = 35
@@ -36,7 +38,14 @@ export interface MeterResult {
 
 // R = Π(driver ÷ driven) × meter ratio: plate revolutions per drive-wheel revolution.
 export function driveRatio(stages: DriveStageTeeth[], meterRatio: number): Decimal {
-  return stages.reduce((r, s) => r.mul(s.driverTeeth).div(s.drivenTeeth), new Decimal(meterRatio))
+  // Whole teeth multiply exactly, so one division serves the whole train.
+  let up = new Decimal(meterRatio)
+  let down = new Decimal(1)
+  for (const s of stages) {
+    up = up.mul(s.driverTeeth)
+    down = down.mul(s.drivenTeeth)
+  }
+  return up.div(down)
 }
 
 // spacing (in) = circumference ÷ (cells × R × (1 − slip/100)); seeds/acre = 6,272,640 ÷ (row in × spacing in).
@@ -46,18 +55,19 @@ export function computeMeter(input: MeterInput): MeterResult {
   if (!(input.slipPercent < 100)) throw new RangeError('Slip must be below 100 %: at 100 % the drive wheel does not turn the meter')
   const r = driveRatio(input.stages, input.meterRatio)
   const seedsPerWheelRev = r.mul(input.cellsPerPlate)
-  const rolling = new Decimal(1).minus(new Decimal(input.slipPercent).div(100))
-  const seedSpacingIn = new Decimal(input.wheelCircumferenceIn).div(seedsPerWheelRev.mul(rolling))
-  const seedsPerAcre = new Decimal(SQ_IN_PER_ACRE).div(new Decimal(input.rowSpacingIn).mul(seedSpacingIn))
+  // Seeds per inch of travel = seeds per wheel revolution × (100 − slip) ÷ (100 × circumference);
+  // everything else follows from it with one division each (divisions are the costly step).
+  const seedsPerIn = seedsPerWheelRev.mul(HUNDRED.minus(input.slipPercent)).div(new Decimal(input.wheelCircumferenceIn).mul(100))
+  const seedSpacingIn = ONE.div(seedsPerIn)
   const result: MeterResult = {
     plateRevsPerWheelRev: r.toNumber(),
     seedsPerWheelRev: seedsPerWheelRev.toNumber(),
     seedSpacingIn: seedSpacingIn.toNumber(),
-    seedsPerAcre: seedsPerAcre.toNumber(),
-    seedsPerFoot: new Decimal(12).div(seedSpacingIn).toNumber(),
+    seedsPerAcre: seedsPerIn.mul(SQ_IN_PER_ACRE).div(input.rowSpacingIn).toNumber(),
+    seedsPerFoot: seedsPerIn.mul(12).toNumber(),
   }
   if (input.speedMph !== undefined && input.speedMph > 0) {
-    const seedsPerSecond = IN_PER_S_PER_MPH.mul(input.speedMph).div(seedSpacingIn)
+    const seedsPerSecond = seedsPerIn.mul(IN_PER_S_PER_MPH).mul(input.speedMph)
     const plateRpm = seedsPerSecond.mul(60).div(input.cellsPerPlate)
     result.seedsPerSecond = seedsPerSecond.toNumber()
     result.plateRpm = plateRpm.toNumber()
