@@ -21,9 +21,12 @@ export function badRequest(message: string, fields?: Record<string, string>): ne
 }
 
 export async function validBody<S extends z.ZodType>(event: H3Event, schema: S): Promise<z.infer<S>> {
+  // JSON.parse on the raw text: the API takes only JSON, JSON.parse never touches prototypes, and
+  // the strict schemas below refuse any key they do not name; h3's readBody adds a scan on top.
   let body: unknown
   try {
-    body = await readBody(event)
+    const raw = await readRawBody(event, 'utf8')
+    body = raw ? JSON.parse(raw) : undefined
   } catch {
     badRequest('The request body is not valid JSON')
   }
