@@ -8,6 +8,7 @@ import type { SetupConfig, SetupResults } from '#shared/types/setup'
 import type { Member } from '../utils/membership'
 import { solvePlanter } from './equipment'
 import { getRevision } from './setups'
+import { MAX_PHOTOS_PER_RECORD } from '#shared/utils/upload-limits'
 
 const { fieldChecks, setups, planters, users, fields, cropPlans, seedLots } = schema
 
@@ -252,8 +253,6 @@ export async function applyCheckSlip(member: Member, id: number, body: z.infer<t
   })
 }
 
-const MAX_CHECK_PHOTOS = 10
-
 // Adds photos to a check already taken: its author, the owner or an agronomist; ids already on the
 // check are kept once.
 export async function addCheckPhotos(member: Member, id: number, body: z.infer<typeof checkPhotosBody>) {
@@ -265,8 +264,8 @@ export async function addCheckPhotos(member: Member, id: number, body: z.infer<t
     if (!reviewer && check.authorId !== member.user.id) throw createError({ statusCode: 403, message: 'Only the author of the check, the owner or an agronomist can add photos to it' })
     await assertFarmUploads(tx, member.farmId, body.uploadIds, PHOTO_TYPES, 'uploadIds')
     const photoUploadIds = [...new Set([...check.photoUploadIds, ...body.uploadIds])]
-    if (photoUploadIds.length > MAX_CHECK_PHOTOS) {
-      badRequest(`A check keeps at most ${MAX_CHECK_PHOTOS} photos`, { uploadIds: `This check has ${check.photoUploadIds.length}; add at most ${MAX_CHECK_PHOTOS - check.photoUploadIds.length}` })
+    if (photoUploadIds.length > MAX_PHOTOS_PER_RECORD) {
+      badRequest(`A check keeps at most ${MAX_PHOTOS_PER_RECORD} photos`, { uploadIds: `This check has ${check.photoUploadIds.length}; add at most ${MAX_PHOTOS_PER_RECORD - check.photoUploadIds.length}` })
     }
     await tx.update(fieldChecks).set({ photoUploadIds }).where(eq(fieldChecks.id, id))
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'add-photos', entity: 'field_check', entityId: id, before: { photoUploadIds: check.photoUploadIds }, after: { photoUploadIds } })

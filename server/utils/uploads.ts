@@ -22,8 +22,8 @@ import type { H3Event } from 'h3'
 import { and, eq, inArray } from 'drizzle-orm'
 import type { Member } from './membership'
 import type { Tx } from './db'
+import { UPLOAD_MAX_BYTES } from '#shared/utils/upload-limits'
 
-export const UPLOAD_MAX_BYTES = 10 * 1024 * 1024
 export const UPLOAD_TYPES = ['text/csv', 'image/jpeg', 'image/png', 'image/webp'] as const
 export type UploadType = (typeof UPLOAD_TYPES)[number]
 export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const satisfies readonly UploadType[]

@@ -1,20 +1,6 @@
 import type { H3Event } from 'h3'
 import type { z } from 'zod'
-
-// Flattens zod issues to one message per dotted field path, the shape every 400 carries.
-export function zodFieldMessages(error: z.ZodError): Record<string, string> {
-  const fields: Record<string, string> = {}
-  for (const issue of error.issues) {
-    const base = issue.path.join('.')
-    if (issue.code === 'unrecognized_keys') {
-      for (const key of issue.keys) fields[base ? `${base}.${key}` : key] = 'Unknown field'
-      continue
-    }
-    const path = base || '_'
-    if (!fields[path]) fields[path] = issue.message
-  }
-  return fields
-}
+import { fieldErrors } from '#shared/utils/validation'
 
 export function badRequest(message: string, fields?: Record<string, string>): never {
   throw createError({ statusCode: 400, statusMessage: 'Bad Request', message, data: { fields: fields ?? {} } })
@@ -31,13 +17,13 @@ export async function validBody<S extends z.ZodType>(event: H3Event, schema: S):
     badRequest('The request body is not valid JSON')
   }
   const result = schema.safeParse(body ?? {})
-  if (!result.success) badRequest('Some fields need attention', zodFieldMessages(result.error))
+  if (!result.success) badRequest('Some fields need attention', fieldErrors(result.error))
   return result.data
 }
 
 export function validQuery<S extends z.ZodType>(event: H3Event, schema: S): z.infer<S> {
   const result = schema.safeParse(getQuery(event))
-  if (!result.success) badRequest('Some query parameters need attention', zodFieldMessages(result.error))
+  if (!result.success) badRequest('Some query parameters need attention', fieldErrors(result.error))
   return result.data
 }
 

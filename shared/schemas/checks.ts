@@ -1,3 +1,4 @@
+import { MAX_PHOTOS_PER_RECORD } from '../utils/upload-limits'
 import { z } from 'zod'
 import { positive, rowSpacingIn, spacingQualityBody } from './calc'
 import { shortText } from './common'
@@ -20,7 +21,7 @@ const links = {
   planId: recordId('Crop plan').optional(),
   checkedOn: isoDate.optional(),
   note: shortText(2000).optional(),
-  photoUploadIds: z.array(recordId('Photo'), { error: 'Photos must be a list' }).max(10, 'Attach at most 10 photos').optional(),
+  photoUploadIds: z.array(recordId('Photo'), { error: 'Photos must be a list' }).max(MAX_PHOTOS_PER_RECORD, 'Attach at most 10 photos').optional(),
 }
 
 export const seedDropCheckBody = z.strictObject({
@@ -88,5 +89,5 @@ export type SpacingCheckBody = z.infer<typeof spacingCheckBody>
 
 // Photos added to a check after it was taken (a dig photographed later, a gap found on a second walk).
 export const checkPhotosBody = z.strictObject({
-  uploadIds: z.array(recordId('Photo'), { error: 'Photos must be a list' }).min(1, 'Choose at least one photo').max(10, 'Attach at most 10 photos'),
+  uploadIds: z.array(recordId('Photo'), { error: 'Photos must be a list' }).min(1, 'Choose at least one photo').max(MAX_PHOTOS_PER_RECORD, 'Attach at most 10 photos'),
 })

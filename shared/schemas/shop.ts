@@ -1,3 +1,4 @@
+import { MAX_PHOTOS_PER_RECORD } from '../utils/upload-limits'
 import { z } from 'zod'
 import { shortText } from './common'
 
@@ -29,7 +30,7 @@ export const inspectionListQuery = z.object({ planterId: z.coerce.number().int()
 export const inspectionItemPatch = z.strictObject({
   result: z.enum(ITEM_RESULTS, { error: 'Choose ok, needs fixing or replaced' }).nullable(),
   notes: optionalText(2000),
-  photoUploadIds: z.array(z.number().int().positive().max(2_147_483_647, 'Photos must be a list of ids'), { error: 'Photos must be a list of ids' }).max(10, 'At most 10 photos').optional(),
+  photoUploadIds: z.array(z.number().int().positive().max(2_147_483_647, 'Photos must be a list of ids'), { error: 'Photos must be a list of ids' }).max(MAX_PHOTOS_PER_RECORD, 'At most 10 photos').optional(),
 }).partial()
 
 export const inspectionComplete = z.strictObject({ notes: optionalText(2000) })
