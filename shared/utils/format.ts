@@ -7,6 +7,12 @@ export function fmtNum(n: number | null | undefined, digits = 2): string {
   return n == null || !Number.isFinite(n) ? '—' : n.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits })
 }
 
+// Dollars with the sign in front of the symbol: −$432.00.
+export function fmtMoney(n: number | null | undefined): string {
+  if (n == null || !Number.isFinite(n)) return '—'
+  return `${n < 0 ? '−' : ''}$${fmtNum(Math.abs(n), 2)}`
+}
+
 export function fmtSigned(n: number | null | undefined, digits = 1): string {
   if (n == null || !Number.isFinite(n)) return '—'
   const s = n.toFixed(digits)

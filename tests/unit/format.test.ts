@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { fmtDay, fmtInt, fmtLabel, fmtQty } from '../../shared/utils/format'
+import { fmtDay, fmtInt, fmtLabel, fmtMoney, fmtQty } from '../../shared/utils/format'
 
 // Display formatting only (no published source needed): en-US month names and separators.
 describe('fmtDay', () => {
@@ -31,5 +31,13 @@ describe('fmtLabel and fmtInt', () => {
   })
   it('rounds whole numbers with separators', () => {
     expect(fmtInt(138963.4)).toBe('138,963')
+  })
+})
+
+describe('fmtMoney', () => {
+  it('puts the sign before the dollar symbol and keeps cents', () => {
+    expect(fmtMoney(-432)).toBe('−$432.00')
+    expect(fmtMoney(1234.5)).toBe('$1,234.50')
+    expect(fmtMoney(null)).toBe('—')
   })
 })
