@@ -10,12 +10,18 @@ export interface Member {
 }
 
 // The member's role is cached for a few seconds per instance; a role change or removal clears the
-// entry here at once, and other instances see it within the TTL.
+// entry here at once, other instances as soon as the change feed tells them, and within the TTL
+// at worst (the feed down).
 const ROLE_TTL_MS = Number(process.env.ROWBENCH_ROLE_TTL_MS || 5_000)
 const roleCache = new Map<string, { role: Role | null, farmName: string, at: number }>()
 
 export function forgetMembership(userId: number, farmId: number) {
   roleCache.delete(`${userId}:${farmId}`)
+}
+
+// Called by the change feed when memberships or farms change anywhere, or the feed is down.
+export function forgetAllMemberships() {
+  roleCache.clear()
 }
 
 async function lookupRole(userId: number, farmId: number) {

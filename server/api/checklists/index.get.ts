@@ -2,5 +2,5 @@ import { listTemplates } from '../../services/shop'
 
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
-  return listTemplates(member.farmId)
+  return cachedResponse(event, member, () => listTemplates(member.farmId))
 })

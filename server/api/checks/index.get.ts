@@ -4,5 +4,5 @@ import { listChecks } from '../../services/checks'
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
   const query = validQuery(event, checkListQuery)
-  return listChecks(member.farmId, query)
+  return cachedResponse(event, member, () => listChecks(member.farmId, query))
 })

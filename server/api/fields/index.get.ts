@@ -4,5 +4,5 @@ import { listFields } from '../../services/fields'
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
   const query = validQuery(event, fieldListQuery)
-  return listFields(member.farmId, query)
+  return cachedResponse(event, member, () => listFields(member.farmId, query))
 })

@@ -4,5 +4,5 @@ import { listInspections } from '../../services/shop'
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
   const { planterId } = validQuery(event, inspectionListQuery)
-  return listInspections(member.farmId, planterId)
+  return cachedResponse(event, member, () => listInspections(member.farmId, planterId))
 })

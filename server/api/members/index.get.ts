@@ -1,5 +1,5 @@
 import { listMembers } from '../../services/accounts'
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
-  return listMembers(member.farmId)
+  return cachedResponse(event, member, () => listMembers(member.farmId))
 })

@@ -4,5 +4,5 @@ import { listPlans } from '../../services/plans'
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
   const query = validQuery(event, planListQuery)
-  return listPlans(member.farmId, query)
+  return cachedResponse(event, member, () => listPlans(member.farmId, query))
 })

@@ -2,5 +2,5 @@ import { listPlanters } from '../../services/equipment'
 
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
-  return listPlanters(member.farmId)
+  return cachedResponse(event, member, () => listPlanters(member.farmId))
 })

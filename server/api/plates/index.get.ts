@@ -2,5 +2,5 @@ import { listPlates } from '../../services/equipment'
 
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
-  return listPlates(member.farmId)
+  return cachedResponse(event, member, () => listPlates(member.farmId))
 })

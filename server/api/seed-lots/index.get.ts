@@ -4,5 +4,5 @@ import { listSeedLots } from '../../services/fields'
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
   const query = validQuery(event, seedLotListQuery)
-  return listSeedLots(member.farmId, query)
+  return cachedResponse(event, member, () => listSeedLots(member.farmId, query))
 })

@@ -4,5 +4,5 @@ import { listSetups } from '../../services/setups'
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
   const query = validQuery(event, setupListQuery)
-  return listSetups(member.farmId, query)
+  return cachedResponse(event, member, () => listSetups(member.farmId, query))
 })

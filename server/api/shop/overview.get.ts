@@ -2,5 +2,5 @@ import { shopOverview } from '../../services/shop'
 
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
-  return shopOverview(member.farmId)
+  return cachedResponse(event, member, () => shopOverview(member.farmId))
 })

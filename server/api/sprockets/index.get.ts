@@ -2,5 +2,5 @@ import { listSprockets } from '../../services/equipment'
 
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
-  return listSprockets(member.farmId)
+  return cachedResponse(event, member, () => listSprockets(member.farmId))
 })

@@ -4,5 +4,5 @@ import { listWorkItems } from '../../services/shop'
 export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
   const query = validQuery(event, workItemQuery)
-  return listWorkItems(member.farmId, query)
+  return cachedResponse(event, member, () => listWorkItems(member.farmId, query))
 })

@@ -5,5 +5,5 @@ export default defineEventHandler(async (event) => {
   const member = await requireMember(event)
   const { season } = validParams(event, seasonParams)
   const query = validQuery(event, seasonSummaryQuery)
-  return seasonSummary(member.farmId, season, query)
+  return cachedResponse(event, member, () => seasonSummary(member.farmId, season, query))
 })
