@@ -1,13 +1,16 @@
 #!/usr/bin/env node
 // Throughput on loopback with autocannon (50 connections): the health route beside a signed-in
-// calculator and a signed-in list of 50 setups, on the same server in the same run. The routes take
+// calculator and signed-in lists of setups, on the same server in the same run. The routes take
 // turns over several rounds so a busy machine weighs on all of them alike; the ratio is the figure.
+// Lists are answered from memory until a write drops them; the last row writes a setup from another
+// connection every WRITE_EVERY_MS meanwhile, so each write's notification empties the cache.
 import autocannon from 'autocannon'
 import pg from 'pg'
 import { benchMember, benchServer, printTable, signIn } from './lib.mjs'
 
 const seconds = Number(process.env.BENCH_SECONDS || 10)
 const rounds = Number(process.env.BENCH_ROUNDS || 2)
+const WRITE_EVERY_MS = 50
 const server = await benchServer('http')
 try {
   const member = await benchMember(server.databaseUrl)
@@ -19,11 +22,20 @@ try {
     { route: 'POST /api/calc/meter (signed in)', opts: { url: `${server.baseUrl}/api/calc/meter`, method: 'POST', body: meterBody, headers: { cookie, 'content-type': 'application/json' } } },
     { route: 'GET /api/setups, 10 rows (signed in)', opts: { url: `${server.baseUrl}/api/setups?limit=10`, headers: { cookie } } },
     { route: 'GET /api/setups, 50 rows (signed in)', opts: { url: `${server.baseUrl}/api/setups?limit=50`, headers: { cookie } } },
+    { route: `GET /api/setups, 50 rows, a write every ${WRITE_EVERY_MS} ms`, opts: { url: `${server.baseUrl}/api/setups?limit=50`, headers: { cookie } }, writes: true },
   ]
+  const writer = new pg.Pool({ connectionString: server.databaseUrl, max: 1 })
+  let writes = 0
   const samples = new Map(targets.map((t) => [t.route, []]))
   for (let round = 0; round < rounds; round++) {
-    for (const t of targets) samples.get(t.route).push(await autocannon({ ...t.opts, connections: 50, duration: seconds / rounds }))
+    for (const t of targets) {
+      const timer = t.writes ? setInterval(() => { writes++; writer.query(`update setups set updated_at = now() where farm_id = $1 and id = (select max(id) from setups where farm_id = $1)`, [member.farmId]) }, WRITE_EVERY_MS) : undefined
+      samples.get(t.route).push(await autocannon({ ...t.opts, connections: 50, duration: seconds / rounds }))
+      clearInterval(timer)
+    }
   }
+  await writer.end()
+  console.log(`writes during the last row: ${writes}`)
   const mean = (xs) => xs.reduce((a, b) => a + b, 0) / xs.length
   const healthRps = mean(samples.get(targets[0].route).map((r) => r.requests.average))
   printTable(`HTTP throughput, 50 connections, ${seconds} s per route in ${rounds} turns`, targets.map((t) => {

@@ -13,6 +13,9 @@ export class PageStore {
   // Keys of each farm's pages, so a farm's drop does not scan every farm's.
   #farmKeys = new Map<number, Set<string>>()
   #pages: LRUCache<string, Entry>
+  // Loads under way, by ticket and key: requests that miss together after a drop share one load
+  // instead of each going to the database; a request after a later drop gets a load of its own.
+  #loading = new Map<string, Promise<StoredPage>>()
 
   constructor(opts: { maxBytes: number, ttlMs: number, maxEntryBytes: number }) {
     this.#pages = new LRUCache<string, Entry>({
@@ -46,6 +49,26 @@ export class PageStore {
     if (!keys) this.#farmKeys.set(farmId, keys = new Set())
     keys.add(key)
     return true
+  }
+
+  // The kept page, or one load shared by every caller that asks for the key before it settles.
+  // `mayKeep` is asked once the load is done (the change feed may have gone down meanwhile).
+  async fetch(farmId: number, key: string, load: () => Promise<StoredPage>, mayKeep: () => boolean = () => true): Promise<StoredPage> {
+    const hit = this.get(key)
+    if (hit) return hit
+    const ticket = this.begin(farmId)
+    const flight = `${ticket}|${key}`
+    let pending = this.#loading.get(flight)
+    if (!pending) {
+      pending = load().then((page) => {
+        if (mayKeep()) this.keep(ticket, farmId, key, page)
+        return page
+      })
+      this.#loading.set(flight, pending)
+      const done = () => this.#loading.delete(flight)
+      pending.then(done, done)
+    }
+    return pending
   }
 
   forget(farmId?: number) {

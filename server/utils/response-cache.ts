@@ -12,7 +12,7 @@ import { PageStore, type StoredPage } from './page-store'
 //   - nothing is cached while the change feed is down, and no page lives past TTL_MS (for pages that
 //     show the date, such as what is due).
 // A load that overlaps a drop is served but not kept (PageStore's ticket), so a page read before a
-// commit can never be stored after it.
+// commit can never be stored after it; requests that miss together share one load.
 const TTL_MS = Number(process.env.ROWBENCH_RESPONSE_CACHE_TTL_MS || 30_000)
 const MAX_BYTES = Number(process.env.ROWBENCH_RESPONSE_CACHE_MB || 64) * 1024 * 1024
 const ENABLED = process.env.ROWBENCH_RESPONSE_CACHE !== 'off'
@@ -50,9 +50,9 @@ export async function cachedResponse<T>(event: H3Event, member: Member, load: ()
   const key = `${member.farmId}:${member.user.id}:${member.role}:${event.path}`
   const kept = pages.get(key)
   if (kept) return answer(event, kept, 'hit') as T
-  const ticket = pages.begin(member.farmId)
-  const json = JSON.stringify(await load())
-  const page = { json, etag: `"${createHash('sha1').update(json).digest('base64url')}"` }
-  if (changeFeedLive()) pages.keep(ticket, member.farmId, key, page)
+  const page = await pages.fetch(member.farmId, key, async () => {
+    const json = JSON.stringify(await load())
+    return { json, etag: `"${createHash('sha1').update(json).digest('base64url')}"` }
+  }, changeFeedLive)
   return answer(event, page, 'miss') as T
 }

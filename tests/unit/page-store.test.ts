@@ -92,3 +92,48 @@ describe('page store', () => {
     }), { numRuns: 500 })
   })
 })
+
+describe('page store loads', () => {
+  const deferred = () => {
+    let resolve!: (p: { json: string, etag: string }) => void
+    const promise = new Promise<{ json: string, etag: string }>((r) => { resolve = r })
+    return { promise, resolve }
+  }
+
+  it('shares one load among callers that miss together, then serves the kept page', async () => {
+    const s = store()
+    const d = deferred()
+    let loads = 0
+    const load = () => { loads++; return d.promise }
+    const callers = Array.from({ length: 20 }, () => s.fetch(1, '1:list', load))
+    d.resolve(page('[shared]'))
+    const pages = await Promise.all(callers)
+    expect(loads).toBe(1)
+    expect(new Set(pages.map((p) => p.json))).toEqual(new Set(['[shared]']))
+    expect(await s.fetch(1, '1:list', load)).toMatchObject(page('[shared]'))
+    expect(loads).toBe(1)
+  })
+
+  it('a caller after a drop does not join a load begun before it, and the older load is not kept', async () => {
+    const s = store()
+    const before = deferred()
+    const after = deferred()
+    const early = s.fetch(1, '1:list', () => before.promise)
+    s.forget(1)
+    const late = s.fetch(1, '1:list', () => after.promise)
+    before.resolve(page('[before the write]'))
+    after.resolve(page('[after the write]'))
+    expect((await early).json).toBe('[before the write]')
+    expect((await late).json).toBe('[after the write]')
+    expect(s.get('1:list')?.json).toBe('[after the write]')
+  })
+
+  it('keeps nothing when told not to, and a failed load reaches every caller and is retried next time', async () => {
+    const s = store()
+    await s.fetch(1, '1:a', async () => page('[x]'), () => false)
+    expect(s.get('1:a')).toBeUndefined()
+    const failing = () => Promise.reject(new Error('database away'))
+    await expect(Promise.all([s.fetch(1, '1:b', failing), s.fetch(1, '1:b', failing)])).rejects.toThrow('database away')
+    expect((await s.fetch(1, '1:b', async () => page('[back]'))).json).toBe('[back]')
+  })
+})
