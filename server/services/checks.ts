@@ -245,7 +245,7 @@ export async function applyCheckSlip(member: Member, id: number, body: z.infer<t
     if (body.configVersion !== undefined && body.configVersion !== before.configVersion) {
       throw createError({ statusCode: 409, message: 'Someone else changed this planter since you opened it. Reload to see their changes.' })
     }
-    const slipPercent = new Decimal(results.impliedSlipPercent).toDecimalPlaces(2).toNumber()
+    const slipPercent = new Decimal(results.impliedSlipPercent).toDecimalPlaces(2).toNumber() || 0
     const [after] = await tx.update(planters).set({ slipPercent, configVersion: sql`${planters.configVersion} + 1` }).where(eq(planters.id, before.id)).returning()
     await tx.update(fieldChecks).set({ slipAppliedPercent: slipPercent, slipAppliedPlanterId: before.id, slipAppliedBy: member.user.id, slipAppliedAt: new Date() }).where(eq(fieldChecks.id, id))
     await writeAudit(tx, { farmId: member.farmId, userId: member.user.id, action: 'update', entity: 'planter', entityId: before.id, before: { slipPercent: before.slipPercent }, after: { slipPercent, fromCheckId: id } })

@@ -11,10 +11,13 @@ export type DueState = 'ok' | 'soon' | 'due'
 
 // Due at 100 % of the acre interval or on the date; "soon" from 90 % or 14 days ahead (common practice, no source).
 export function serviceDue(input: ServiceDueInput): { state: DueState, acresLeft: number | null, daysLeft: number | null } {
-  const acresLeft = input.intervalAcres == null ? null : Math.round((input.intervalAcres - input.acresSinceService) * 10) / 10
+  // Judged to the thousandth of an acre (sums of field areas carry float noise), shown to the tenth:
+  // 0.04 ac left is not yet due.
+  const exactLeft = input.intervalAcres == null ? null : Math.round((input.intervalAcres - input.acresSinceService) * 1000) / 1000
+  const acresLeft = exactLeft == null ? null : Math.round(exactLeft * 10) / 10 || 0
   const daysLeft = input.nextDueOn == null ? null : Math.round((Date.parse(input.nextDueOn) - Date.parse(input.today)) / 86_400_000)
   let state: DueState = 'ok'
-  if ((acresLeft != null && acresLeft <= 0) || (daysLeft != null && daysLeft <= 0)) state = 'due'
-  else if ((acresLeft != null && input.intervalAcres != null && acresLeft <= input.intervalAcres * 0.1) || (daysLeft != null && daysLeft <= 14)) state = 'soon'
+  if ((exactLeft != null && exactLeft <= 0) || (daysLeft != null && daysLeft <= 0)) state = 'due'
+  else if ((exactLeft != null && input.intervalAcres != null && exactLeft <= input.intervalAcres * 0.1) || (daysLeft != null && daysLeft <= 14)) state = 'soon'
   return { state, acresLeft, daysLeft }
 }

@@ -49,6 +49,9 @@ export function seedDropSummary(input: SeedDropInput): SeedDropSummary {
     ? impliedSlipPercent({ expectedSeedsPerAcre: setup.div(keep(input.setupSlipPercent)).toNumber(), countedSeedsPerAcre: counted.toNumber() })
     : null
   const found = setup.gt(0) ? onGround.div(setup) : new Decimal(0)
+  // Judged at the 0.01 % the planter stores, so a count that matches the setup exactly is a slip of 0,
+  // not a floating-point hair below it (-0 becomes 0).
+  const storedSlip = implied === null ? null : new Decimal(implied).toDecimalPlaces(2).toNumber() || 0
   return {
     basis: byTurns ? 'revolutions' : 'length',
     rows, lengthFt,
@@ -56,7 +59,7 @@ export function seedDropSummary(input: SeedDropInput): SeedDropSummary {
     errorVsSetupPercent: setup.gt(0) ? found.minus(1).mul(100).toNumber() : 0,
     errorVsTargetPercent: onGround.div(input.targetSeedsPerAcre).minus(1).mul(100).toNumber(),
     impliedSlipPercent: implied,
-    slipStorable: implied !== null && implied >= 0 && implied <= 50,
+    slipStorable: storedSlip !== null && storedSlip >= 0 && storedSlip <= 50,
     solverTargetSeedsPerAcre: found.isZero() ? 0 : new Decimal(input.targetSeedsPerAcre).mul(keep(input.planterSlipPercent)).div(keep(input.setupSlipPercent).mul(found)).toNumber(),
   }
 }

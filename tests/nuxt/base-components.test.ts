@@ -43,3 +43,20 @@ describe('BaseField', () => {
     expect(wrapper.text()).toContain('Driver teeth must be a whole number from 1 to 200')
   })
 })
+
+describe('BaseToastHost', () => {
+  it('announces an error at once (role alert) and other news politely (role status), each dismissable', async () => {
+    const { default: BaseToastHost } = await import('../../components/base/ToastHost.vue')
+    const toast = useToast()
+    toast.dismiss(-1)
+    toast.toasts.value = []
+    const wrapper = await mountSuspended(BaseToastHost)
+    toast.error('The database is briefly unavailable. Please retry in a few seconds.')
+    toast.success('Setup saved')
+    await nextTick()
+    const items = wrapper.findAll('[data-kind]')
+    expect(items.map((i) => [i.attributes('data-kind'), i.attributes('role')])).toEqual([['error', 'alert'], ['success', 'status']])
+    await items[0]!.find('button[aria-label="Dismiss"]').trigger('click')
+    expect(wrapper.findAll('[data-kind]').map((i) => i.text())).toEqual([expect.stringContaining('Setup saved')])
+  })
+})

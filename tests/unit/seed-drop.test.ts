@@ -37,6 +37,14 @@ describe('seed-drop check', () => {
     expect(seedDropSummary({ ...base, rows: [{ row: 1, seedsCounted: 0 }], lengthFt: 17.424 }).solverTargetSeedsPerAcre).toBe(0)
   })
 
+  it('a count that matches the setup exactly is a storable slip of 0, not a floating-point hair below it (computed)', () => {
+    // 20 seeds over 17.42 ft of 30 in rows = 20 × 43,560 ÷ 43.55 ft² at 0 % slip; the setup stored that rate at 3 %.
+    const atZero = 20 * 43_560 / (17.42 * 2.5)
+    const s = seedDropSummary({ ...base, setupSeedsPerAcre: atZero * 0.97, setupSlipPercent: 3, planterSlipPercent: 3, rows: [{ row: 1, seedsCounted: 20 }], lengthFt: 17.42 })
+    expect(Math.abs(s.impliedSlipPercent!)).toBeLessThan(1e-9)
+    expect(s.slipStorable).toBe(true)
+  })
+
   it('the solver target times what the check found lands on the target (property)', () => {
     fc.assert(fc.property(fc.integer({ min: 1, max: 80 }), fc.double({ min: 0, max: 20, noNaN: true }), fc.double({ min: 0, max: 20, noNaN: true }), (seeds, setupSlip, planterSlip) => {
       const s = seedDropSummary({ ...base, setupSlipPercent: setupSlip, planterSlipPercent: planterSlip, rows: [{ row: 1, seedsCounted: seeds }], lengthFt: 17.424 })

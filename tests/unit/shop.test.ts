@@ -80,6 +80,12 @@ describe('serviceDue', () => {
     expect(serviceDue({ ...base, acresSinceService: 365 })).toMatchObject({ state: 'soon', acresLeft: 35 })
     expect(serviceDue({ ...base, acresSinceService: 100 })).toMatchObject({ state: 'ok', acresLeft: 300 })
   })
+  it('judges acres before rounding them for display: 0.04 ac left is not due yet, float noise on the line is', () => {
+    expect(serviceDue({ ...base, acresSinceService: 399.96 })).toMatchObject({ state: 'soon', acresLeft: 0 })
+    // 0.1 + 0.2 + 399.7 is 400.00000000000006 in floating point: the interval is reached.
+    expect(serviceDue({ ...base, acresSinceService: 0.1 + 0.2 + 399.7 })).toMatchObject({ state: 'due', acresLeft: 0 })
+    expect(serviceDue({ ...base, acresSinceService: 400.04 })).toMatchObject({ state: 'due', acresLeft: 0 })
+  })
   it('is due on the date and soon within 14 days of it', () => {
     expect(serviceDue({ ...base, intervalAcres: null, nextDueOn: '2026-05-01', acresSinceService: 0 })).toMatchObject({ state: 'due', daysLeft: 0 })
     expect(serviceDue({ ...base, intervalAcres: null, nextDueOn: '2026-05-11', acresSinceService: 0 })).toMatchObject({ state: 'soon', daysLeft: 10 })
