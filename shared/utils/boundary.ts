@@ -81,6 +81,27 @@ function ringInside(ring: Position[], other: Position[]): boolean {
   return true
 }
 
+// A point of the part's ground proper: inside its outer ring and outside (not on) every hole.
+function onGroundOf(p: Position, polygon: Position[][]): boolean {
+  return sideOf(p, polygon[0]!) === 'in' && polygon.slice(1).every((hole) => sideOf(p, hole) === 'out')
+}
+
+// Degrees; far below a survey's precision, far above float noise in an intersection point.
+const CORNER_TOLERANCE = 1e-9
+
+// Two valid parts share ground when one's corner lies on the other's ground, when one lies wholly
+// inside the other, or when their edges cross away from any corner (a plus sign: no corner of either
+// lies inside the other). Parts that only touch along an edge or at a corner do not overlap.
+function partsOverlap(a: Position[][], b: Position[][]): boolean {
+  if (a[0]!.some((p) => onGroundOf(p, b)) || b[0]!.some((p) => onGroundOf(p, a))) return true
+  const within = (x: Position[][], y: Position[][]) => ringInside(x[0]!, y[0]!) && !y.slice(1).some((hole) => ringInside(x[0]!, hole))
+  if (within(a, b) || within(b, a)) return true
+  const corners = [...a.flat(), ...b.flat()]
+  const atCorner = (q: Position) => corners.some((c) => Math.abs(c[0]! - q[0]!) < CORNER_TOLERANCE && Math.abs(c[1]! - q[1]!) < CORNER_TOLERANCE)
+  // Each part was checked for crossing itself, so every point found here is where the two meet.
+  return kinks({ type: 'MultiPolygon', coordinates: [a, b] }).features.some((f) => !atCorner(f.geometry.coordinates as Position))
+}
+
 function checkPolygon(rings: unknown, label: string): { rings?: Position[][], error?: string } {
   if (!Array.isArray(rings) || rings.length === 0) return { error: `${label} has no rings` }
   const out: Position[][] = []
@@ -126,8 +147,7 @@ export function checkBoundary(input: unknown): BoundaryResult {
       const res = checkPolygon(coords[i], `Polygon ${i + 1}`)
       if (res.error) return fail(res.error)
       // Parts that overlap would count the shared ground twice; an island in another part's hole is fine.
-      const within = (a: Position[][], b: Position[][]) => ringInside(a[0]!, b[0]!) && !b.slice(1).some((hole) => ringInside(a[0]!, hole))
-      const j = polys.findIndex((q) => within(res.rings!, q) || within(q, res.rings!))
+      const j = polys.findIndex((q) => partsOverlap(res.rings!, q))
       if (j >= 0) return fail(`Polygons ${j + 1} and ${i + 1} overlap; draw each piece of ground once`)
       polys.push(res.rings!)
     }

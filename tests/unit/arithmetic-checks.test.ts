@@ -299,6 +299,16 @@ describe('field outlines that would miscount acres', () => {
     expect(message({ type: 'MultiPolygon', coordinates: [[ring(0.01)], [ring(0.002, 0.004, 0.004)]] })).toMatch(/Polygons 1 and 2 overlap/)
   })
 
+  it('rejects parts that cross like a plus sign, where no corner of either lies inside the other', () => {
+    const bar = (x0: number, y0: number, x1: number, y1: number) => [[x0, y0], [x1, y0], [x1, y1], [x0, y1], [x0, y0]]
+    expect(message({ type: 'MultiPolygon', coordinates: [[bar(0, 0.01, 0.03, 0.02)], [bar(0.01, 0, 0.02, 0.03)]] })).toMatch(/Polygons 1 and 2 overlap/)
+    // An island poking out of its lake crosses the lake's shore and shares the lake part's ground.
+    expect(message({ type: 'MultiPolygon', coordinates: [[ring(0.03), ring(0.01, 0.01, 0.01)], [bar(0.012, 0.005, 0.018, 0.025)]] })).toMatch(/Polygons 1 and 2 overlap/)
+    // Touching at one corner, or along part of an edge, is not an overlap.
+    expect(message({ type: 'MultiPolygon', coordinates: [[ring(0.01)], [ring(0.01, 0.01, 0.01)]] })).toMatch(/^ok/)
+    expect(message({ type: 'MultiPolygon', coordinates: [[bar(0, 0, 0.02, 0.01)], [bar(0.01, 0.01, 0.03, 0.02)]] })).toMatch(/^ok/)
+  })
+
   it('keeps parts that only share an edge, and an island in another part\'s hole, with their areas added', () => {
     const side = checkBoundary({ type: 'MultiPolygon', coordinates: [[ring(0.01)], [ring(0.01, 0.01, 0)]] })
     const one = checkBoundary({ type: 'Polygon', coordinates: [ring(0.01)] })
