@@ -65,6 +65,13 @@ export function planSeed(plan: Pick<SeasonPlan, 'targetStand' | 'survivalPercent
   }
 }
 
+// Rows a planter plants at a plan's spacing: its toolbar width is fixed (rows × its own spacing), so
+// split rows at half the spacing plant twice the rows, lifted units half; whole rows only.
+export function rowsAtPlanSpacing(planter: Pick<PlanPlanter, 'rowCount' | 'rowSpacingIn'>, planRowSpacingIn: number): number {
+  if (planRowSpacingIn === planter.rowSpacingIn) return planter.rowCount
+  return Math.max(1, new Decimal(planter.rowCount).mul(planter.rowSpacingIn).div(planRowSpacingIn).floor().toNumber())
+}
+
 export interface PlanHopper { rowAcresPerFill: number, planterAcresPerFill: number, fills: number, refillStops: number }
 
 // Acres per hopper fill from the row hopper's lb and seeds per lb (see hopperCoverage); with every row
@@ -72,17 +79,18 @@ export interface PlanHopper { rowAcresPerFill: number, planterAcresPerFill: numb
 export function planHopper(plan: Pick<SeasonPlan, 'acres' | 'rowSpacingIn' | 'lot' | 'planter'>, seedsPerAcre: number): PlanHopper | null {
   const hopperLb = plan.planter?.seedHopperLb
   if (!hopperLb || !plan.lot) return null
-  const h = hopperCoverage({ hopperLb, seedsPerLb: plan.lot.seedsPerLb, seedsPerAcre, rowSpacingIn: plan.rowSpacingIn, rows: plan.planter!.rowCount })
+  const h = hopperCoverage({ hopperLb, seedsPerLb: plan.lot.seedsPerLb, seedsPerAcre, rowSpacingIn: plan.rowSpacingIn, rows: rowsAtPlanSpacing(plan.planter!, plan.rowSpacingIn) })
   const f = fillPlan({ capacity: h.planterAcresPerFill!, ratePerAcre: 1, fieldAcres: plan.acres })
   return { rowAcresPerFill: h.rowAcresPerFill, planterAcresPerFill: h.planterAcresPerFill!, fills: f.fills, refillStops: f.refillStops }
 }
 
 export interface PlanCapacity { widthFt: number, acresPerHour: number, hours: number, days: number }
 
-// Effective field capacity from the planter's rows at the plan's spacing and speed (see computeCapacity).
+// Effective field capacity from the rows the planter plants at the plan's spacing and the plan's speed
+// (see computeCapacity).
 export function planCapacity(plan: Pick<SeasonPlan, 'acres' | 'rowSpacingIn' | 'speedMph' | 'planter'>, opts: { hoursPerDay: number, efficiencyPercent: number }): PlanCapacity | null {
   if (!plan.planter) return null
-  const c = computeCapacity({ rows: plan.planter.rowCount, rowSpacingIn: plan.rowSpacingIn, speedMph: plan.speedMph, efficiencyPercent: opts.efficiencyPercent })
+  const c = computeCapacity({ rows: rowsAtPlanSpacing(plan.planter, plan.rowSpacingIn), rowSpacingIn: plan.rowSpacingIn, speedMph: plan.speedMph, efficiencyPercent: opts.efficiencyPercent })
   const d = daysToPlant({ acres: plan.acres, acresPerHour: c.acresPerHour, hoursPerDay: opts.hoursPerDay })
   return { ...c, ...d }
 }

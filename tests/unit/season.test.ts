@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
-import { planSeed, planHopper, summariseSeason, weekStartOf, type PlanLot, type SeasonPlan } from '../../shared/utils/season'
+import { planCapacity, planSeed, planHopper, rowsAtPlanSpacing, summariseSeason, weekStartOf, type PlanLot, type SeasonPlan } from '../../shared/utils/season'
 import { planActions, PLAN_NEXT, PLAN_STATUS_ROLES } from '../../shared/utils/plan-workflow'
 
 // An invented season, computed by hand below each figure.
@@ -76,6 +76,18 @@ describe('season summary', () => {
     expect(board.fields[0]!.refillStops).toBe(2)
     expect(board.hours).toBeCloseTo(265 / (6 * 40 * 0.7 / 8.25), 9)
     expect(board.days).toBeCloseTo(265 / (6 * 40 * 0.7 / 8.25) / 10, 9)
+  })
+
+  it('a plan at another row spacing than its planter keeps the toolbar width: 16 rows at 30 in split to 32 at 15 in, still 40 ft and 20.4 acres/h (PM 696 as above; rows computed)', () => {
+    expect(rowsAtPlanSpacing(planter, 15)).toBe(32)
+    expect(rowsAtPlanSpacing(planter, 30)).toBe(16)
+    // 480 in ÷ 22 in = 21.8 → 21 whole rows, 38.5 ft.
+    expect(rowsAtPlanSpacing(planter, 22)).toBe(21)
+    const split = { ...plans[2]!, rowSpacingIn: 15 }
+    expect(planCapacity(split, { hoursPerDay: 10, efficiencyPercent: 70 })!.widthFt).toBe(40)
+    expect(planCapacity(split, { hoursPerDay: 10, efficiencyPercent: 70 })!.acresPerHour).toBeCloseTo(6 * 40 * 0.7 / 8.25, 9)
+    // Hopper: 50 lb × 2,800 seeds/lb ÷ 126,000 = 1.111 row-acres per fill, over 32 rows → 35.56 acres (computed).
+    expect(planHopper(split, 126_000)!.planterAcresPerFill).toBeCloseTo(50 * 2800 / 126_000 * 32, 9)
   })
 
   it('acres per week start on the Monday; a plan without a window is unscheduled', () => {
