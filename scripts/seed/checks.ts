@@ -6,6 +6,7 @@ import { seedDropSummary } from '../../shared/utils/seed-drop'
 import { solveDrive } from '../../shared/utils/solver'
 import type { SeedDropResults, SpacingResults, StandCountResults } from '../../shared/types/checks'
 import type { SeedDb } from './index'
+import { LAST_SEASON } from './plans'
 import type { seedAccounts } from './accounts'
 
 type Accounts = Awaited<ReturnType<typeof seedAccounts>>
@@ -16,7 +17,8 @@ export async function seedChecks(db: SeedDb, a: Accounts) {
   const farmId = a.farm.id
   const [setup] = await db.select().from(schema.setups).where(and(eq(schema.setups.farmId, farmId), eq(schema.setups.crop, 'corn'))).orderBy(asc(schema.setups.id)).limit(1)
   if (!setup) return
-  const [rev] = await db.select().from(schema.setupRevisions).where(and(eq(schema.setupRevisions.setupId, setup.id), eq(schema.setupRevisions.revision, setup.latestRevision)))
+  // Last season's checks were made on revision 2, the one Schoolhouse 80 was planted with.
+  const [rev] = await db.select().from(schema.setupRevisions).where(and(eq(schema.setupRevisions.setupId, setup.id), eq(schema.setupRevisions.revision, Math.min(2, setup.latestRevision))))
   const [planter] = await db.select().from(schema.planters).where(eq(schema.planters.id, setup.planterId))
   const [field] = await db.select().from(schema.fields).where(and(eq(schema.fields.farmId, farmId), eq(schema.fields.name, 'Schoolhouse 80')))
   const { config, results: computed } = rev!
@@ -24,13 +26,13 @@ export async function seedChecks(db: SeedDb, a: Accounts) {
   const stages = await db.select().from(schema.driveStages).where(eq(schema.driveStages.sectionId, section.sectionId!)).orderBy(asc(schema.driveStages.position))
   const plates = await db.select().from(schema.seedPlates).where(and(eq(schema.seedPlates.farmId, farmId), inArray(schema.seedPlates.code, ['CF-C30', 'CF-C24', 'CF-C16'])))
   const lengthFt = 17.424
-  // The season's plan on this field, when the plans were seeded: its targets apply, as on the server.
+  // Last season's plan on this field, when the plans were seeded: its targets apply, as on the server.
   const [plan] = field ? await db.select({ plan: schema.cropPlans, germinationPercent: schema.seedLots.germinationPercent }).from(schema.cropPlans)
     .leftJoin(schema.seedLots, eq(schema.seedLots.id, schema.cropPlans.seedLotId))
-    .where(and(eq(schema.cropPlans.farmId, farmId), eq(schema.cropPlans.fieldId, field.id))).limit(1) : []
+    .where(and(eq(schema.cropPlans.farmId, farmId), eq(schema.cropPlans.fieldId, field.id), eq(schema.cropPlans.season, LAST_SEASON))).limit(1) : []
   const target = plan ? seedingRateForStand({ targetStand: plan.plan.targetStand, germinationPercent: plan.germinationPercent ?? 100, survivalPercent: plan.plan.survivalPercent }).seedsPerAcre : config.targetSeedsPerAcre
   const targetStand = plan?.plan.targetStand ?? 32_000
-  const year = plan?.plan.season ?? 2026
+  const year = LAST_SEASON
   const link = { farmId, setupId: setup.id, setupRevision: rev!.revision, fieldId: field?.id ?? null, planId: plan?.plan.id ?? null, authorId: a.operator.id }
 
   const dig = { rows: [{ row: 1, seedsCounted: 33 }, { row: 6, seedsCounted: 32 }, { row: 12, seedsCounted: 34 }], lengthFt }
@@ -58,9 +60,9 @@ export async function seedChecks(db: SeedDb, a: Accounts) {
   const spacing: SpacingResults = { ...q, theoreticalIn, histogram: spacingHistogram({ spacingsIn, theoreticalIn }), cornYieldLossBuPerAcre: cornYieldLossFromSpacingSd({ spacingSdIn: q.sdIn }).buPerAcre }
 
   await db.insert(schema.fieldChecks).values([
-    { ...link, kind: 'seed-drop', rows: [1, 6, 12], checkedOn: `${year}-04-22`, inputs: { kind: 'seed-drop', ...dig }, results: seedDrop, note: 'Dug behind the planter on the first pass.',
-      reviewStatus: 'correction-needed', reviewComment: 'Light against the plan. Check the drive tire pressure, then take the solver\'s first choice.', reviewedBy: a.agronomist.id, reviewedAt: new Date(`${year}-04-22T18:00:00Z`) },
-    { ...link, kind: 'stand-count', rows: [1, 6, 12], checkedOn: `${year}-05-12`, inputs: { kind: 'stand-count', counts, lengthFt }, results: standResults, note: 'Six counts across the field after emergence.' },
-    { ...link, kind: 'spacing', rows: [6], checkedOn: `${year}-05-12`, inputs: { kind: 'spacing', row: 6, spacingsIn, theoreticalIn }, results: spacing },
+    { ...link, kind: 'seed-drop', rows: [1, 6, 12], checkedOn: `${year}-04-27`, createdAt: new Date(`${year}-04-27T20:00:00Z`), inputs: { kind: 'seed-drop', ...dig }, results: seedDrop, note: 'Dug behind the planter on the first pass.',
+      reviewStatus: 'correction-needed', reviewComment: 'Light against the plan. Check the drive tire pressure, then take the solver\'s first choice.', reviewedBy: a.agronomist.id, reviewedAt: new Date(`${year}-04-27T23:00:00Z`) },
+    { ...link, kind: 'stand-count', rows: [1, 6, 12], checkedOn: `${year}-05-18`, createdAt: new Date(`${year}-05-18T20:00:00Z`), inputs: { kind: 'stand-count', counts, lengthFt }, results: standResults, note: 'Six counts across the field after emergence.' },
+    { ...link, kind: 'spacing', rows: [6], checkedOn: `${year}-05-18`, createdAt: new Date(`${year}-05-18T20:30:00Z`), inputs: { kind: 'spacing', row: 6, spacingsIn, theoreticalIn }, results: spacing },
   ])
 }

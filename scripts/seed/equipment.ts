@@ -2,6 +2,7 @@ import { eq } from 'drizzle-orm'
 import * as schema from '../../server/db/schema'
 import { computeSetupResults } from '../../shared/utils/setup-results'
 import type { SetupConfig, SetupRowUnit } from '../../shared/types/setup'
+import { defaultSeason } from '../../shared/utils/season'
 import type { SeedDb } from './index'
 import type { seedAccounts } from './accounts'
 
@@ -75,22 +76,25 @@ export async function seedEquipment(db: SeedDb, a: Accounts) {
     ],
     rowUnits: creekRows,
   }
-  const saved = async (planterId: number, name: string, by: number, revisions: { config: SetupConfig, note: string, by?: number }[]) => {
-    const [setup] = await db.insert(schema.setups).values({ farmId, planterId, name, crop: revisions[0]!.config.crop, latestRevision: revisions.length, createdBy: by }).returning()
+  // Revisions saved on the given dates, else one a day up to yesterday.
+  const saved = async (planterId: number, name: string, by: number, revisions: { config: SetupConfig, note: string, by?: number, savedAt?: Date }[]) => {
+    const savedAt = revisions.map((r, i) => r.savedAt ?? new Date(Date.now() - (revisions.length - i) * 86_400_000))
+    const [setup] = await db.insert(schema.setups).values({ farmId, planterId, name, crop: revisions[0]!.config.crop, latestRevision: revisions.length, createdBy: by, createdAt: savedAt[0] }).returning()
     await db.insert(schema.setupRevisions).values(revisions.map((r, i) => ({
-      setupId: setup!.id, revision: i + 1, config: r.config, results: computeSetupResults(r.config), note: r.note, savedBy: r.by ?? by,
-      savedAt: new Date(Date.now() - (revisions.length - i) * 86_400_000),
+      setupId: setup!.id, revision: i + 1, config: r.config, results: computeSetupResults(r.config), note: r.note, savedBy: r.by ?? by, savedAt: savedAt[i],
     })))
     return setup!
   }
+  // The corn setup planted last spring (revisions 1 and 2), readied in the shop for the coming one (3).
+  const lastSpring = (month: number, dayOfMonth: number) => new Date(Date.UTC(defaultSeason() - 1, month - 1, dayOfMonth, 15))
   const cornSetup = await saved(north!.id, 'North 12 · corn 34k · river bottoms', a.operator.id, [
-    { config: northConfig, note: 'As the planter came out of the shop.' },
-    { config: northV2, note: 'Dropped to 17/23 and 17/26 after the seed-drop check ran about 4 % high.' },
+    { config: northConfig, note: 'As the planter came out of the shop.', savedAt: lastSpring(4, 20) },
+    { config: northV2, note: 'Dropped to 17/23 and 17/26 after the seed-drop check ran about 4 % high.', savedAt: lastSpring(4, 24) },
     { config: northV3, note: 'Deeper into moisture for the sandy knobs.', by: a.foreman.id },
   ])
   const beanSetup = await saved(creek!.id, 'Creek 15 · soybeans 140k · 15 in', a.operator.id, [{ config: creekConfig, note: 'Narrow-row beans, both bars on the 48-cell plate.' }])
   await db.insert(schema.setupComments).values([
-    { setupId: cornSetup.id, revision: 2, userId: a.agronomist.id, body: 'Revision 2 lands within 1 % of target. Keep the 2 in depth on the sandy knobs only if moisture is short.' },
+    { setupId: cornSetup.id, revision: 2, userId: a.agronomist.id, body: 'Revision 2 lands within 1 % of target. Keep the 2 in depth on the sandy knobs only if moisture is short.', createdAt: lastSpring(4, 24) },
     { setupId: cornSetup.id, revision: 3, userId: a.operator.id, body: 'Moisture is short on the knobs; going with 2 in everywhere on this field.' },
   ])
   return { planters: [north!, creek!], setups: [cornSetup, beanSetup], plates }

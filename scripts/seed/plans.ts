@@ -1,5 +1,6 @@
 import { inArray } from 'drizzle-orm'
 import * as schema from '../../server/db/schema'
+import { defaultSeason } from '../../shared/utils/season'
 import type { SeedDb } from './index'
 import type { seedAccounts } from './accounts'
 import type { seedEquipment } from './equipment'
@@ -8,12 +9,15 @@ type Accounts = Awaited<ReturnType<typeof seedAccounts>>
 type Equipment = Awaited<ReturnType<typeof seedEquipment>>
 type Status = (typeof schema.planStatusEnum.enumValues)[number]
 
-export const DEMO_SEASON = 2027
+// The season being planned when the demo is seeded (from August on, next spring's), and the one
+// before it, already planted: so no seeded date lies in the future, whenever the demo starts.
+export const DEMO_SEASON = defaultSeason()
+export const LAST_SEASON = DEMO_SEASON - 1
 
-// The invented 2027 season at Cottonwood Flats: corn on North 12, soybeans on Creek 15, and plans
-// in every review status with the events and comments a season would leave behind.
+// The invented coming season at Cottonwood Flats: corn on North 12, soybeans on Creek 15, and plans
+// in every review status before planting, with the events and comments planning leaves behind.
 const PLANS: { field: string, lot: string | null, stand: number, status: Status, order: number, start: number, withSetup?: boolean, notes?: string }[] = [
-  { field: 'Home Quarter', lot: 'RL-2611-A', stand: 34_000, status: 'planted', order: 1, start: 0, notes: 'First in: the tile lets it dry earliest.' },
+  { field: 'Home Quarter', lot: 'RL-2611-A', stand: 34_000, status: 'set-up', order: 1, start: 0, notes: 'First in: the tile lets it dry earliest.' },
   { field: 'Schoolhouse 80', lot: 'RL-2611-B', stand: 33_000, status: 'set-up', order: 2, start: 2 },
   { field: 'Big Pivot', lot: 'RL-2611-A', stand: 36_000, status: 'approved', order: 3, start: 4, notes: 'Irrigated: push the population.' },
   { field: 'Sand Knob', lot: 'SG-2601-D', stand: 28_000, status: 'changes-requested', order: 4, start: 6 },
@@ -68,5 +72,25 @@ export async function seedPlans(db: SeedDb, a: Accounts, eq: Equipment, made: { 
         { planId: plan!.id, userId: a.foreman.id, body: 'Spare chain for the second stage is on the truck.', createdAt: ago(15) },
       ])
     }
+  }
+
+  // Last season's corn in Schoolhouse 80, planted on the revision its seed-drop check led to; the
+  // field checks (checks.ts) and the banded insecticide record (applications.ts) belong to it.
+  const schoolhouse = fieldRows.find((f) => f.name === 'Schoolhouse 80')
+  if (schoolhouse) {
+    const last = (month: number, dayOfMonth: number, hour = 15) => new Date(Date.UTC(LAST_SEASON, month - 1, dayOfMonth, hour))
+    const [plan] = await db.insert(schema.cropPlans).values({
+      farmId, season: LAST_SEASON, fieldId: schoolhouse.id, crop: 'corn', targetStand: 33_000, survivalPercent: 95, rowSpacingIn: 30,
+      windowStart: `${LAST_SEASON}-04-22`, windowEnd: `${LAST_SEASON}-05-02`, planterId: north!.id, speedMph: 5, marginPercent: 5, sortOrder: 1,
+      status: 'planted', setupId: cornSetup!.id, proposedBy: a.operator.id, approvedRevision: 2, approvedBy: a.agronomist.id, approvedAt: last(4, 25),
+      plantedOn: `${LAST_SEASON}-04-27`, plantedAcres: schoolhouse.acres, createdBy: a.agronomist.id, createdAt: last(3, 10),
+    }).returning()
+    await db.insert(schema.planEvents).values([
+      { planId: plan!.id, fromStatus: null, toStatus: 'draft', comment: 'Plan created', userId: a.agronomist.id, createdAt: last(3, 10) },
+      { planId: plan!.id, fromStatus: 'draft', toStatus: 'submitted', setupRevision: 1, comment: 'The shop setup as it came out.', userId: a.operator.id, createdAt: last(4, 21) },
+      { planId: plan!.id, fromStatus: 'submitted', toStatus: 'approved', setupRevision: 2, comment: 'Revision 2 after the dig; go.', userId: a.agronomist.id, createdAt: last(4, 25) },
+      { planId: plan!.id, fromStatus: 'approved', toStatus: 'set-up', setupRevision: 2, comment: 'Sprockets changed to 17/23 and 17/26.', userId: a.foreman.id, createdAt: last(4, 26) },
+      { planId: plan!.id, fromStatus: 'set-up', toStatus: 'planted', setupRevision: 2, comment: null, userId: a.operator.id, createdAt: last(4, 27, 21) },
+    ])
   }
 }

@@ -2,6 +2,7 @@ import { and, eq } from 'drizzle-orm'
 import * as schema from '../../server/db/schema'
 import { DEFAULT_CHECKLIST, DEFAULT_CHECKLIST_NAME } from '../../shared/utils/checklist'
 import type { SeedDb } from './index'
+import { LAST_SEASON } from './plans'
 import type { seedAccounts } from './accounts'
 
 type Accounts = Awaited<ReturnType<typeof seedAccounts>>
@@ -44,17 +45,18 @@ export async function seedShop(db: SeedDb, a: Accounts) {
     { farmId, planterId: north.id, inspectionItemId: items[8]!.id, title: `${items[8]!.area}: ${items[8]!.label}`, notes: results[8]!.notes, status: 'open', createdBy: a.foreman.id },
   ])
 
-  // Last season's planting by North 12, so the log has acres to count since each service.
+  // Last season's planting by North 12 (besides Schoolhouse 80, plans.ts), so the log has acres to
+  // count since each service.
   const field = async (name: string) => (await db.select().from(schema.fields).where(and(eq(schema.fields.farmId, farmId), eq(schema.fields.name, name))))[0]
-  const planted = [[await field('Home Quarter'), 190], [await field('Big Pivot'), 186]] as const
-  for (const [f, ago] of planted) {
+  const planted = [[await field('Home Quarter'), '05-08'], [await field('Big Pivot'), '05-12']] as const
+  for (const [f, day] of planted) {
     if (!f) continue
-    await db.insert(schema.cropPlans).values({ farmId, season: daysAgo(ago).getUTCFullYear(), fieldId: f.id, crop: 'corn', targetStand: 32_000, rowSpacingIn: 30, planterId: north.id, status: 'planted', plantedOn: isoDay(daysAgo(ago)), createdBy: a.owner.id })
+    await db.insert(schema.cropPlans).values({ farmId, season: LAST_SEASON, fieldId: f.id, crop: 'corn', targetStand: 32_000, rowSpacingIn: 30, planterId: north.id, status: 'planted', plantedOn: `${LAST_SEASON}-${day}`, createdBy: a.owner.id, createdAt: new Date(`${LAST_SEASON}-03-01T15:00:00Z`) })
   }
 
   const inDays = (n: number) => isoDay(new Date(Date.now() + n * 86_400_000))
   await db.insert(schema.serviceEvents).values([
-    { farmId, planterId: north.id, servicedOn: isoDay(daysAgo(200)), task: 'Drive chains cleaned and oiled', intervalAcres: 250, notes: 'Soaked in chain oil overnight.', performedBy: a.foreman.id },
+    { farmId, planterId: north.id, servicedOn: `${LAST_SEASON}-04-15`, task: 'Drive chains cleaned and oiled', intervalAcres: 250, notes: 'Soaked in chain oil overnight.', performedBy: a.foreman.id },
     { farmId, planterId: north.id, servicedOn: isoDay(daysAgo(150)), task: 'Wheel bearings repacked', nextDueOn: inDays(10), performedBy: a.foreman.id },
     { farmId, planterId: north.id, servicedOn: isoDay(daysAgo(30)), task: 'Wing fold cylinders resealed', notes: 'Both wings; no weeping after a week.', performedBy: a.foreman.id },
     { farmId, planterId: creek.id, servicedOn: isoDay(daysAgo(60)), task: 'Drive chains cleaned and oiled', intervalAcres: 300, nextDueOn: inDays(120), performedBy: a.operator.id },

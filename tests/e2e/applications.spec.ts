@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test'
-import { signIn, signOut } from './helpers'
+import { LAST_SEASON, signIn, signOut } from './helpers'
 
 test('an operator runs a catch test at three settings and saves the dial setting onto the setup', async ({ page }, info) => {
   await signIn(page, 'operator')
@@ -44,12 +44,12 @@ test('an operator runs a catch test at three settings and saves the dial setting
 
 test('an operator records a restricted-use application, is told what the federal rule needs, and corrects it; the foreman only reads', async ({ page }, info) => {
   await signIn(page, 'operator')
-  await page.goto('/applications?season=2026')
+  await page.goto(`/applications?season=${LAST_SEASON}`)
   await expect(page.getByText('7 CFR Part 110')).toBeVisible()
   await page.getByRole('button', { name: 'New record' }).click()
   const dialog = page.getByRole('dialog')
   await dialog.getByLabel('Restricted-use product').check()
-  await dialog.getByLabel('Date applied').fill('2026-05-10')
+  await dialog.getByLabel('Date applied').fill(`${LAST_SEASON}-05-10`)
   await dialog.getByLabel('Field', { exact: true }).selectOption({ label: 'East Forty' })
   await expect(dialog.getByLabel('Field or site name')).toHaveValue('East Forty')
   await expect(dialog.getByLabel('Area treated')).toHaveValue('40')
@@ -78,11 +78,11 @@ test('an operator records a restricted-use application, is told what the federal
   await page.screenshot({ path: info.outputPath('records.png'), fullPage: true })
   await signOut(page)
   await signIn(page, 'foreman')
-  await page.goto('/applications?season=2026')
+  await page.goto(`/applications?season=${LAST_SEASON}`)
   await expect(page.getByRole('row').filter({ hasText: 'East Forty' })).toHaveCount(2)
   await expect(page.getByRole('button', { name: 'New record' })).toHaveCount(0)
   await expect(page.getByRole('button', { name: 'Correct' })).toHaveCount(0)
-  await expect(page.getByRole('link', { name: 'Export 2026 as CSV' })).toHaveAttribute('href', '/api/application-records/export.csv?season=2026')
+  await expect(page.getByRole('link', { name: `Export ${LAST_SEASON} as CSV` })).toHaveAttribute('href', `/api/application-records/export.csv?season=${LAST_SEASON}`)
   await page.goto('/applications/rates')
   await expect(page.getByTestId('chemical-cautions')).toBeVisible()
   // 8.7 lb per field acre in 30 in rows = 7.99 oz per 1,000 ft (computed).

@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test'
-import { pngFixture, signIn } from './helpers'
+import { LAST_SEASON, pngFixture, signIn } from './helpers'
 
 // A phone held in the field.
 test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true })
@@ -71,11 +71,12 @@ test('an operator reads a spacing CSV with junk lines and sees them by line numb
 
 test('the agronomist reviews a stand count from the plan\'s page and weighs a replant', async ({ page }) => {
   await signIn(page, 'agronomist')
-  await page.goto('/plans?season=2027')
+  // Last season's Schoolhouse 80, planted on revision 2 of the corn setup, carries the demo checks.
+  await page.goto(`/plans?season=${LAST_SEASON}`)
   await page.getByRole('link', { name: /Schoolhouse 80/ }).first().click()
   const linked = page.getByTestId('linked-checks')
   await expect(linked.getByRole('listitem')).toHaveCount(3)
-  await linked.getByRole('link', { name: 'Stand count · revision 3' }).click()
+  await linked.getByRole('link', { name: 'Stand count · revision 2' }).click()
   // Six demo counts over 1/1000 acre: 31, 33, 30, 32, 29, 32 thousand → mean 31,167 (computed).
   await expect(page.getByTestId('stand-result')).toContainText('31,167 /ac')
   await expect(page.getByLabel('Stand found')).toHaveValue('31167')

@@ -1,7 +1,11 @@
 import { deflateSync } from 'node:zlib'
 import { expect, type Page } from '@playwright/test'
+import { defaultSeason } from '../../shared/utils/season'
 
 export const DEMO_PASSWORD = 'rowbench-demo'
+// The demo seeds the season being planned and the one before it, planted (scripts/seed/plans.ts).
+export const DEMO_SEASON = defaultSeason()
+export const LAST_SEASON = DEMO_SEASON - 1
 
 export async function signIn(page: Page, role: 'owner' | 'agronomist' | 'operator' | 'foreman') {
   await page.goto('/login')
