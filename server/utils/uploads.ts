@@ -16,10 +16,14 @@
  * - `assertFarmUploads(tx, farmId, ids, accept?, field?)` is a 400 unless every id is one of the
  *   farm's uploads (of an accepted type); use it before linking uploads to a record.
  * - `sniffUploadType(bytes)` names the type from the content, or null.
+ * - `sweepOrphanUploads(graceHours)` deletes the files no record has named for `graceHours` since
+ *   they were sent (a photo removed from a checklist line, an upload never attached), rows and audit
+ *   entries in one transaction, then the bytes; it keeps every file a column of the schema's
+ *   `UPLOAD_REFERENCES` names.
  */
 import { randomUUID } from 'node:crypto'
 import type { H3Event } from 'h3'
-import { and, eq, inArray } from 'drizzle-orm'
+import { and, eq, inArray, sql } from 'drizzle-orm'
 import type { Member } from './membership'
 import type { Tx } from './db'
 import { UPLOAD_MAX_BYTES } from '#shared/utils/upload-limits'
@@ -117,8 +121,36 @@ export async function readUpload(farmId: number, id: number): Promise<{ upload: 
 export async function assertFarmUploads(tx: Tx, farmId: number, ids: number[], accept: readonly UploadType[] = UPLOAD_TYPES, field = 'photoUploadIds'): Promise<UploadRow[]> {
   const unique = [...new Set(ids)]
   if (!unique.length) return []
-  const rows = await tx.select().from(schema.uploads).where(and(eq(schema.uploads.farmId, farmId), inArray(schema.uploads.id, unique)))
+  // Key-share locks keep the sweeper from deleting a file while this transaction links it.
+  const rows = await tx.select().from(schema.uploads).where(and(eq(schema.uploads.farmId, farmId), inArray(schema.uploads.id, unique))).for('key share')
   const ok = rows.filter((r) => accept.includes(r.contentType as UploadType))
   if (ok.length !== unique.length) badRequest('An attached file is unknown or of the wrong type', { [field]: 'Unknown file or wrong type' })
   return ok
+}
+
+// Keeps what schema UPLOAD_REFERENCES lists.
+const unreferenced = sql`not exists (select 1 from field_checks c where c.csv_upload_id = u.id or u.id = any(c.photo_upload_ids))
+  and not exists (select 1 from inspection_items i where u.id = any(i.photo_upload_ids))`
+
+export async function sweepOrphanUploads(graceHours: number): Promise<number> {
+  const removed = await useDb().transaction(async (tx) => {
+    // Lock the candidates first (skipping any a linking transaction holds), then delete those still
+    // unnamed by a fresh look: a link committed in between keeps its file.
+    const candidates = await tx.execute<{ id: number }>(sql`select u.id from uploads u
+      where u.created_at < now() - make_interval(hours => ${graceHours}) and ${unreferenced}
+      order by u.id limit 500 for update of u skip locked`)
+    if (!candidates.rows.length) return []
+    const ids = candidates.rows.map((r) => Number(r.id))
+    const gone = await tx.execute<{ id: number, farm_id: number, storage_key: string, file_name: string | null, content_type: string, created_at: string }>(sql`delete from uploads u
+      where u.id in ${ids} and ${unreferenced}
+      returning u.id, u.farm_id, u.storage_key, u.file_name, u.content_type, u.created_at`)
+    for (const r of gone.rows) {
+      await writeAudit(tx, { farmId: r.farm_id, userId: null, action: 'delete', entity: 'upload', entityId: r.id, before: { fileName: r.file_name, contentType: r.content_type, createdAt: r.created_at }, after: { reason: `no record named it for ${graceHours} h` } })
+    }
+    return gone.rows
+  })
+  for (const r of removed) {
+    await storage().removeItem(r.storage_key).catch((err) => console.warn(`[uploads] could not remove ${r.storage_key}: ${(err as Error).message}`))
+  }
+  return removed.length
 }

@@ -10,22 +10,6 @@ import { join } from 'node:path'
 
 const databaseName = () => new URL(inject('databaseUrl')).pathname.slice(1)
 
-class At extends Client {
-  constructor(private base: string) {
-    super()
-  }
-  override async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
-    const res = await fetch(`${this.base}${path}`, {
-      method,
-      headers: { ...(body !== undefined ? { 'content-type': 'application/json' } : {}), ...(this.cookie ? { cookie: this.cookie } : {}), ...headers },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    })
-    for (const c of res.headers.getSetCookie()) if (c.startsWith('rowbench-session=')) this.cookie = c.split(';')[0]!
-    const type = res.headers.get('content-type') ?? ''
-    return { status: res.status, data: type.includes('json') ? await res.json() : await res.text(), headers: res.headers }
-  }
-}
-
 describe('faults', () => {
   it('survives a PostgreSQL restart while requests run: 503s with a retry hint, every acknowledged write kept', async () => {
     const farm = await createFarm()
@@ -69,7 +53,7 @@ describe('faults', () => {
     const pool = new pg.Pool({ connectionString: server.databaseUrl, max: 2 })
     const query = async <T>(text: string, params: unknown[] = []) => (await pool.query(text, params)).rows as T[]
     try {
-      const farm = await createFarm(query as typeof sql, () => new At(server.baseUrl))
+      const farm = await createFarm(query as typeof sql, () => new Client(server.baseUrl))
       const owner = await farm.as('owner')
       const email = `outbox-${Date.now()}@test.example`
       const inv = await owner.post('/api/members/invite', { email, name: 'Olive Outbox', role: 'operator' })
@@ -107,7 +91,7 @@ describe('faults', () => {
       const farm = await createFarm()
       const ownerHere = await farm.as('owner')
       const operatorHere = await farm.as('operator')
-      const operatorThere = new At(other.baseUrl)
+      const operatorThere = new Client(other.baseUrl)
       await operatorThere.post('/api/auth/login', { email: farm.users.operator.email, password: TEST_PASSWORD })
       expect((await operatorHere.get('/api/planters')).status).toBe(200)
       expect((await operatorThere.get('/api/planters')).status).toBe(200)

@@ -24,11 +24,12 @@ export async function sql<T = Record<string, unknown>>(text: string, params: unk
   return (await db().query(text, params)).rows as T[]
 }
 
-// A client with its own cookie jar, speaking JSON to the test server.
+// A client with its own cookie jar, speaking JSON to the test server (or to another instance).
 export class Client {
   cookie = ''
+  constructor(private base?: string) {}
   async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
-    const res = await fetch(`${baseUrl()}${path}`, {
+    const res = await fetch(`${this.base ?? baseUrl()}${path}`, {
       method,
       headers: { ...(body !== undefined ? { 'content-type': 'application/json' } : {}), ...(this.cookie ? { cookie: this.cookie } : {}), ...headers },
       body: body === undefined ? undefined : typeof body === 'string' ? body : JSON.stringify(body),

@@ -29,23 +29,6 @@ async function farmWithPlate() {
 
 const cacheState = (r: { headers: Headers }) => r.headers.get('x-rowbench-cache')
 
-class At extends Client {
-  constructor(private base: string) { super() }
-  override async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
-    const res = await fetch(`${this.base}${path}`, {
-      method,
-      headers: { ...(body !== undefined ? { 'content-type': 'application/json' } : {}), ...(this.cookie ? { cookie: this.cookie } : {}), ...headers },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    })
-    for (const c of res.headers.getSetCookie()) {
-      const pair = c.split(';')[0]!
-      if (pair.startsWith('rowbench-session=')) this.cookie = pair
-    }
-    const type = res.headers.get('content-type') ?? ''
-    return { status: res.status, data: type.includes('json') ? await res.json() : await res.text(), headers: res.headers }
-  }
-}
-
 describe('cached list pages', () => {
   it('every table carries the change trigger, so no write goes unheard', async () => {
     const missing = await sql<{ name: string }>(
@@ -140,7 +123,7 @@ describe('cached list pages', () => {
     try {
       const { farm } = await farmWithPlate()
       const owner = await farm.as('owner')
-      const operatorThere = new At(other.baseUrl)
+      const operatorThere = new Client(other.baseUrl)
       expect((await operatorThere.post('/api/auth/login', { email: farm.users.operator.email, password: TEST_PASSWORD })).status).toBe(200)
       await eventually(() => operatorThere.get('/api/plates'), (r) => cacheState(r) === 'hit', 15_000)
       const members = (await owner.get('/api/members')).data as { id: number, userId: number }[]

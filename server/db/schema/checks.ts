@@ -22,6 +22,10 @@ export const uploads = pgTable('uploads', {
   index('uploads_farm_idx').on(t.farmId, t.createdAt),
 ])
 
+// Every column through which a record names uploads, as table.column; the orphan sweep
+// (server/utils/uploads.ts) keeps whatever these name, and a test fails when a column is missing.
+export const UPLOAD_REFERENCES = ['field_checks.csv_upload_id', 'field_checks.photo_upload_ids', 'inspection_items.photo_upload_ids'] as const
+
 export const checkKindEnum = pgEnum('check_kind', CHECK_KINDS)
 export const reviewStatusEnum = pgEnum('check_review_status', REVIEW_STATUSES)
 
