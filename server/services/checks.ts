@@ -159,7 +159,9 @@ export async function createCheck(member: Member, body: z.infer<typeof checkCrea
     rows = body.row ? [body.row] : []
   }
   return useDb().transaction(async (tx) => {
-    await assertFarmUploads(tx, member.farmId, body.photoUploadIds ?? [], ['image/jpeg', 'image/png', 'image/webp'])
+    await assertFarmUploads(tx, member.farmId, body.photoUploadIds ?? [], PHOTO_TYPES)
+    // Read above; locked here so the orphan sweep cannot take it before the check names it.
+    if (body.kind === 'spacing' && body.csvUploadId) await assertFarmUploads(tx, member.farmId, [body.csvUploadId], ['text/csv'], 'csvUploadId')
     const [check] = await tx.insert(fieldChecks).values({
       farmId: member.farmId, kind: body.kind, fieldId: plan.fieldId, planId: plan.planId,
       setupId: rev?.setupId ?? null, setupRevision: rev?.revision ?? null, rows,
