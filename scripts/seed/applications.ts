@@ -20,10 +20,11 @@ export async function seedApplications(db: SeedDb, a: Accounts) {
   if (corn) {
     const [source] = await db.select().from(schema.setupRevisions).where(and(eq(schema.setupRevisions.setupId, corn.id), eq(schema.setupRevisions.revision, corn.latestRevision)))
     // A setup of its own for the banded insecticide, so the granular dial has a history apart from the seed rate's.
-    const [band] = await db.insert(schema.setups).values({ farmId, planterId: corn.planterId, name: 'North 12 · rootworm band · Schoolhouse 80', crop: 'corn', latestRevision: 1, createdBy: a.operator.id }).returning()
+    const bandSavedAt = new Date(Date.UTC(LAST_SEASON, 3, 23, 15))
+    const [band] = await db.insert(schema.setups).values({ farmId, planterId: corn.planterId, name: 'North 12 · rootworm band · Schoolhouse 80', crop: 'corn', latestRevision: 1, createdBy: a.operator.id, createdAt: bandSavedAt, updatedAt: bandSavedAt }).returning()
     const [rev] = await db.insert(schema.setupRevisions).values({
       setupId: band!.id, revision: 1, config: source!.config, results: computeSetupResults(source!.config), savedBy: a.operator.id,
-      note: 'The corn setup with Rowguard 15G in a 7 in band on the odd rows.', savedAt: new Date(Date.UTC(LAST_SEASON, 3, 23, 15)),
+      note: 'The corn setup with Rowguard 15G in a 7 in band on the odd rows.', savedAt: bandSavedAt,
     }).returning()
     // 250 ft course at 30 in: each ounce is 4.356 lb per field acre (computed).
     const points = [{ setting: 14, weightOz: 1.55 }, { setting: 18, weightOz: 2.0 }, { setting: 22, weightOz: 2.45 }]

@@ -79,7 +79,7 @@ export async function seedEquipment(db: SeedDb, a: Accounts) {
   // Revisions saved on the given dates, else one a day up to yesterday.
   const saved = async (planterId: number, name: string, by: number, revisions: { config: SetupConfig, note: string, by?: number, savedAt?: Date }[]) => {
     const savedAt = revisions.map((r, i) => r.savedAt ?? new Date(Date.now() - (revisions.length - i) * 86_400_000))
-    const [setup] = await db.insert(schema.setups).values({ farmId, planterId, name, crop: revisions[0]!.config.crop, latestRevision: revisions.length, createdBy: by, createdAt: savedAt[0] }).returning()
+    const [setup] = await db.insert(schema.setups).values({ farmId, planterId, name, crop: revisions[0]!.config.crop, latestRevision: revisions.length, createdBy: by, createdAt: savedAt[0], updatedAt: savedAt[savedAt.length - 1] }).returning()
     await db.insert(schema.setupRevisions).values(revisions.map((r, i) => ({
       setupId: setup!.id, revision: i + 1, config: r.config, results: computeSetupResults(r.config), note: r.note, savedBy: r.by ?? by, savedAt: savedAt[i],
     })))
