@@ -39,7 +39,7 @@ export function freePort(preferred) {
   })
 }
 
-export async function startTestServer({ database, port: wantPort, smtpPort: wantSmtp, seed = false, fresh = true, smtp = true, env: extra = {}, nodeArgs = [] }) {
+export async function startTestServer({ database, port: wantPort, smtpPort: wantSmtp, seed = false, fresh = true, smtp = true, env: extra = {}, nodeArgs = [], captureOutput = false }) {
   const port = await freePort(wantPort)
   const smtpPort = await freePort(wantSmtp)
   dbUp()
@@ -74,11 +74,15 @@ export async function startTestServer({ database, port: wantPort, smtpPort: want
       ROWBENCH_LOGIN_IP_LIMIT: '20',
       ...extra,
     },
-    stdio: ['ignore', 'inherit', 'inherit'],
+    // captureOutput keeps what the server prints, for tests that read its log.
+    stdio: ['ignore', captureOutput ? 'pipe' : 'inherit', captureOutput ? 'pipe' : 'inherit'],
   })
+  const output = []
+  if (captureOutput) for (const stream of [child.stdout, child.stderr]) stream.on('data', (chunk) => output.push(String(chunk)))
   await waitForHttp(`${baseUrl}/api/health`)
   return {
     baseUrl, databaseUrl, mailbox, uploads, smtpPort, child,
+    log: () => output.join(''),
     async stop() {
       child.kill('SIGTERM')
       await new Promise((r) => (smtpServer ? smtpServer.close(r) : r()))

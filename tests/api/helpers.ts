@@ -93,8 +93,7 @@ export async function createFarm(query: typeof sql = sql, client: () => Client =
 export interface Mail { to: string[], subject: string, text: string, attachments: { filename: string, contentType: string, size: number, contentBase64: string }[] }
 
 // Waits for a message to reach the fake SMTP server.
-export async function waitForMail(match: (m: Mail) => boolean, timeoutMs = 15_000): Promise<Mail> {
-  const dir = inject('mailbox')
+export async function waitForMail(match: (m: Mail) => boolean, timeoutMs = 15_000, dir: string = inject('mailbox')): Promise<Mail> {
   const until = Date.now() + timeoutMs
   while (Date.now() < until) {
     const files = await readdir(dir)
