@@ -20,6 +20,8 @@ export function startFakeSmtp({ port, dir, host = '127.0.0.1' }) {
           from: mail.from?.text ?? '',
           to: session.envelope.rcptTo.map((r) => r.address),
           subject: mail.subject ?? '',
+          // The farm the message belongs to (none for password resets), from Rowbench's own header.
+          farmId: Number(mail.headers.get('x-rowbench-farm')) || null,
           text: mail.text ?? '',
           attachments: (mail.attachments ?? []).map((a) => ({ filename: a.filename, contentType: a.contentType, size: a.size, contentBase64: a.content.toString('base64') })),
         }

@@ -60,24 +60,35 @@ export async function findOpenInvitation(token: string) {
 
 export async function acceptInvitation(token: string, password: string, name?: string) {
   const inv = await findOpenInvitation(token)
-  if (!inv) throw createError({ statusCode: 400, message: 'This invitation link is invalid, used or expired', data: { fields: { token: 'Invalid or expired invitation' } } })
-  const passwordHash = await hashPassword(password)
+  if (!inv) throw invalidInvitation()
+  const [existing] = await useDb().select().from(schema.users).where(eq(schema.users.email, inv.email))
+  // An address that already has an account joins with that account's password: whoever holds the
+  // link must not be able to set a new one (that would take the account over).
+  if (existing && !(existing.passwordHash && await verifyPassword(existing.passwordHash, password))) {
+    throw createError({ statusCode: 400, message: 'This address already has a Rowbench account: enter its password to join', data: { fields: { password: 'Enter the password of your Rowbench account' } } })
+  }
+  const passwordHash = existing ? null : await hashPassword(password)
   return useDb().transaction(async (tx) => {
-    let [user] = await tx.select().from(schema.users).where(eq(schema.users.email, inv.email))
-    if (!user) {
-      [user] = await tx.insert(schema.users).values({ email: inv.email, name: name || inv.name, passwordHash }).returning()
-    } else {
-      await tx.update(schema.users).set({ passwordHash }).where(eq(schema.users.id, user.id))
-    }
+    // Claimed in one statement, so two uses of the same link cannot both succeed.
+    const [claimed] = await tx.update(schema.invitations).set({ acceptedAt: new Date() })
+      .where(and(eq(schema.invitations.id, inv.id), isNull(schema.invitations.acceptedAt), gt(schema.invitations.expiresAt, new Date())))
+      .returning({ id: schema.invitations.id })
+    if (!claimed) throw invalidInvitation()
+    let user = existing
+    if (!user) [user] = await tx.insert(schema.users).values({ email: inv.email, name: name || inv.name, passwordHash: passwordHash! }).returning()
     await tx.insert(schema.memberships).values({ farmId: inv.farmId, userId: user!.id, role: inv.role }).onConflictDoNothing()
-    await tx.update(schema.invitations).set({ acceptedAt: new Date() }).where(eq(schema.invitations.id, inv.id))
     await writeAudit(tx, { farmId: inv.farmId, userId: user!.id, action: 'accept-invitation', entity: 'membership', entityId: user!.id, after: { role: inv.role } })
     return { user: { id: user!.id, email: user!.email, name: user!.name }, farmId: inv.farmId }
   })
 }
 
+function invalidInvitation() {
+  return createError({ statusCode: 400, message: 'This invitation link is invalid, used or expired', data: { fields: { token: 'Invalid or expired invitation' } } })
+}
+
 export async function changeRole(member: Member, membershipId: number, role: Role) {
   return useDb().transaction(async (tx) => {
+    await lockOwners(tx, member.farmId)
     const [before] = await tx.select().from(schema.memberships)
       .where(and(eq(schema.memberships.id, membershipId), eq(schema.memberships.farmId, member.farmId))).for('update')
     if (!before) notFound('Member')
@@ -91,6 +102,7 @@ export async function changeRole(member: Member, membershipId: number, role: Rol
 
 export async function removeMember(member: Member, membershipId: number) {
   return useDb().transaction(async (tx) => {
+    await lockOwners(tx, member.farmId)
     const [before] = await tx.select().from(schema.memberships)
       .where(and(eq(schema.memberships.id, membershipId), eq(schema.memberships.farmId, member.farmId))).for('update')
     if (!before) notFound('Member')
@@ -100,6 +112,13 @@ export async function removeMember(member: Member, membershipId: number) {
     forgetMembership(before.userId, member.farmId)
     return { removed: membershipId }
   })
+}
+
+// Taken first, in id order, by every change that could leave a farm without an owner: two owners
+// demoting each other at once then run one after the other (no deadlock), and the second is refused.
+async function lockOwners(tx: Tx, farmId: number) {
+  await tx.select({ id: schema.memberships.id }).from(schema.memberships)
+    .where(and(eq(schema.memberships.farmId, farmId), eq(schema.memberships.role, 'owner'))).orderBy(asc(schema.memberships.id)).for('update')
 }
 
 async function assertAnotherOwner(tx: Tx, farmId: number, exceptMembershipId: number) {

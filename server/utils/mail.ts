@@ -47,6 +47,8 @@ async function sendDue(): Promise<number> {
         subject: m.subject,
         text: m.text,
         html: m.html ?? undefined,
+        // Which farm a message belongs to, so the demo mailbox shows each farm only its own mail.
+        headers: m.farmId ? { 'X-Rowbench-Farm': String(m.farmId) } : undefined,
         attachments: m.attachments?.map((a) => ({ filename: a.filename, content: Buffer.from(a.contentBase64, 'base64'), contentType: a.contentType })),
       })
       await db.update(schema.outbox).set({ sentAt: new Date(), attempts: m.attempts + 1, lastError: null }).where(eq(schema.outbox.id, m.id))

@@ -172,3 +172,78 @@ describe('roles and farm scope', () => {
     expect(res.status).toBe(403)
   })
 })
+
+describe('accounts under pressure', () => {
+  it('an invitation to an address with an account asks for that account\'s password and never replaces it', async () => {
+    const home = await createFarm()
+    const other = await createFarm()
+    const inviter = await other.as('owner')
+    const email = home.users.agronomist.email
+    expect((await inviter.post('/api/members/invite', { email, name: 'Already Here', role: 'operator' })).status).toBe(201)
+    const token = linkToken((await waitForMail((m) => m.to.includes(email) && m.subject.includes(other.farmName))).text)
+    expect((await new Client().post('/api/invitations/lookup', { token })).data).toMatchObject({ email, accountExists: true })
+    // Whoever holds the link cannot set a new password on the existing account.
+    const takeover = await new Client().post('/api/invitations/accept', { token, password: 'attacker-chosen-1' })
+    expect(takeover.status).toBe(400)
+    expect(takeover.data.data.fields.password).toBe('Enter the password of your Rowbench account')
+    expect((await new Client().post('/api/auth/login', { email, password: 'attacker-chosen-1' })).status).toBe(401)
+    expect(await sql('select 1 from memberships where farm_id = $1 and user_id = $2', [other.farmId, home.users.agronomist.id])).toEqual([])
+    // With the account's own password the farm is added and the password stays.
+    const joined = new Client()
+    expect((await joined.post('/api/invitations/accept', { token, password: TEST_PASSWORD })).status).toBe(200)
+    expect((await joined.get('/api/auth/me')).data.farmId).toBe(other.farmId)
+    expect((await new Client().post('/api/auth/login', { email, password: TEST_PASSWORD })).status).toBe(200)
+  })
+
+  it('one invitation link used twice at once joins once', async () => {
+    const farm = await createFarm()
+    const owner = await farm.as('owner')
+    const email = `twice-${Date.now()}@test.example`
+    expect((await owner.post('/api/members/invite', { email, name: 'Twice Tried', role: 'foreman' })).status).toBe(201)
+    const token = linkToken((await waitForMail((m) => m.to.includes(email))).text)
+    const results = await Promise.all([1, 2, 3].map((i) => new Client().post('/api/invitations/accept', { token, password: `first-try-pass-${i}` })))
+    expect(results.map((r) => r.status).sort()).toEqual([200, 400, 400])
+    expect(await sql<{ n: number }>('select count(*)::int as n from users where email = $1', [email])).toEqual([{ n: 1 }])
+  })
+
+  it('two owners demoting each other at the same moment leave the farm one owner', async () => {
+    const farm = await createFarm()
+    const owner = await farm.as('owner')
+    const members = (await owner.get('/api/members')).data as { id: number, userId: number }[]
+    const second = members.find((m) => m.userId === farm.users.agronomist.id)!
+    expect((await owner.patch(`/api/members/${second.id}`, { role: 'owner' })).status).toBe(200)
+    const first = members.find((m) => m.userId === farm.users.owner.id)!
+    const secondOwner = await farm.as('agronomist')
+    for (let round = 0; round < 5; round++) {
+      const [a, b] = await Promise.all([owner.patch(`/api/members/${second.id}`, { role: 'operator' }), secondOwner.patch(`/api/members/${first.id}`, { role: 'operator' })])
+      const owners = await sql<{ n: number }>(`select count(*)::int as n from memberships where farm_id = $1 and role = 'owner'`, [farm.farmId])
+      expect(owners).toEqual([{ n: 1 }])
+      // One wins; the other is refused: 409 when both ran together, 403 when it came after and
+      // its sender was no longer an owner.
+      const statuses = [a.status, b.status].sort((x, y) => x - y)
+      expect(statuses[0]).toBe(200)
+      expect([403, 409]).toContain(statuses[1])
+      // Put both back as owners for the next round, through the one who kept the role.
+      const keeper = a.status === 200 ? owner : secondOwner
+      const demoted = a.status === 200 ? second : first
+      expect((await keeper.patch(`/api/members/${demoted.id}`, { role: 'owner' })).status).toBe(200)
+    }
+  })
+
+  it('shows an owner only the current farm\'s mail, and never a password reset', async () => {
+    const a = await createFarm()
+    const b = await createFarm()
+    const ownerA = await a.as('owner')
+    const ownerB = await b.as('owner')
+    const invited = `mailbox-${Date.now()}@test.example`
+    expect((await ownerA.post('/api/members/invite', { email: invited, name: 'Mail Box', role: 'operator' })).status).toBe(201)
+    await waitForMail((m) => m.to.includes(invited))
+    expect((await new Client().post('/api/auth/forgot', { email: b.users.owner.email })).status).toBe(200)
+    await waitForMail((m) => m.to.includes(b.users.owner.email) && /reset/i.test(m.subject))
+    const seenByA = (await ownerA.get('/api/mailbox')).data as { to: string[], subject: string }[]
+    const seenByB = (await ownerB.get('/api/mailbox')).data as { to: string[], subject: string }[]
+    expect(seenByA.some((m) => m.to.includes(invited))).toBe(true)
+    expect(seenByB.some((m) => m.to.includes(invited))).toBe(false)
+    expect([...seenByA, ...seenByB].some((m) => /reset/i.test(m.subject))).toBe(false)
+  })
+})
