@@ -40,3 +40,10 @@ export function fmtLabel(s: string | null | undefined): string {
 export function fmtQty(n: number | null | undefined, digits = 2): string {
   return n == null || !Number.isFinite(n) ? '—' : n.toLocaleString('en-US', { maximumFractionDigits: digits })
 }
+
+// The calendar day of `d` where the user is, as YYYY-MM-DD; toISOString() would give the UTC day,
+// which in an American evening is already tomorrow.
+export function localIsoDate(d: Date = new Date()): string {
+  const pad = (n: number) => String(n).padStart(2, '0')
+  return `${String(d.getFullYear()).padStart(4, '0')}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`
+}

@@ -1,5 +1,5 @@
-import { describe, expect, it } from 'vitest'
-import { fmtDay, fmtInt, fmtLabel, fmtMoney, fmtQty } from '../../shared/utils/format'
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
+import { fmtDay, fmtInt, fmtLabel, fmtMoney, fmtQty, localIsoDate } from '../../shared/utils/format'
 
 // Display formatting only (no published source needed): en-US month names and separators.
 describe('fmtDay', () => {
@@ -39,5 +39,35 @@ describe('fmtMoney', () => {
     expect(fmtMoney(-432)).toBe('−$432.00')
     expect(fmtMoney(1234.5)).toBe('$1,234.50')
     expect(fmtMoney(null)).toBe('—')
+  })
+})
+
+describe('localIsoDate', () => {
+  const zone = process.env.TZ
+  beforeEach(() => { process.env.TZ = 'America/Chicago' })
+  afterEach(() => {
+    if (zone === undefined) delete process.env.TZ
+    else process.env.TZ = zone
+  })
+
+  it('keeps a late-evening moment on its own local day', () => {
+    expect(localIsoDate(new Date(2027, 4, 12, 23, 30))).toBe('2027-05-12')
+    expect(localIsoDate(new Date(2026, 11, 31, 23, 59))).toBe('2026-12-31')
+    expect(localIsoDate(new Date(2026, 0, 1, 0, 5))).toBe('2026-01-01')
+  })
+
+  it('gives the local day where the UTC day has already turned (22:30 CDT is 03:30 UTC the next day)', () => {
+    const evening = new Date('2027-05-13T03:30:00Z')
+    expect(evening.toISOString().slice(0, 10)).toBe('2027-05-13')
+    expect(localIsoDate(evening)).toBe('2027-05-12')
+  })
+
+  it('defaults to now', () => {
+    vi.useFakeTimers({ now: new Date(2027, 4, 12, 23, 30) })
+    try {
+      expect(localIsoDate()).toBe('2027-05-12')
+    } finally {
+      vi.useRealTimers()
+    }
   })
 })
