@@ -21,6 +21,8 @@ export function classifyError(error: unknown) {
     // A record still in use elsewhere (a foreign key with on delete restrict).
     if (c.code === '23503') return createError({ statusCode: 409, message: 'Other records still use this one; remove or change them first' })
     if (c.code === '22003') return createError({ statusCode: 400, message: 'A number is out of range', data: { fields: {} } })
+    // A date PostgreSQL cannot store; the schemas refuse these first, this is the last line.
+    if (c.code === '22007' || c.code === '22008') return createError({ statusCode: 400, message: 'A date is not valid', data: { fields: {} } })
   }
   return undefined
 }

@@ -1,7 +1,7 @@
 import { z } from 'zod'
 import { catchPoint, positive, rowSpacingIn } from './calc'
 import { CROPS } from './equipment'
-import { shortText } from './common'
+import { isoDate, shortText } from './common'
 
 // Calculators beside the three of the API: dry catch, course helper, fill planning.
 export const dryRateBody = z.strictObject({
@@ -57,11 +57,7 @@ export const calibrationBody = z.strictObject({
 export const RATE_UNITS = ['lb/acre', 'oz/1000 ft', 'gal/acre', 'fl oz/acre', 'pt/acre', 'qt/acre'] as const
 export const TOTAL_UNITS = ['lb', 'oz', 'gal', 'fl oz', 'pt', 'qt'] as const
 
-const isRealDate = (s: string) => {
-  const d = new Date(`${s}T00:00:00Z`)
-  return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s
-}
-const appliedOn = z.string({ error: 'Give the date as YYYY-MM-DD' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Give the date as YYYY-MM-DD').refine(isRealDate, 'Give a date that exists, as YYYY-MM-DD')
+const appliedOn = isoDate
   .refine((s) => s >= '2000-01-01', 'Give a date from 2000 on')
   // A day of slack for time zones; a record is of something already done.
   .refine((s) => new Date(`${s}T00:00:00Z`).getTime() <= Date.now() + 86_400_000, 'The application date cannot be in the future')

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { plantingDayOfYear } from '../utils/replant'
+import { isoDate } from './common'
 
 // Limits shared by calculators, the equipment forms and the server.
 export const teeth = (label: string) => z.number({ error: `${label} must be a number` }).int(`${label} must be a whole number from 1 to 200`).min(1, `${label} must be a whole number from 1 to 200`).max(200, `${label} must be a whole number from 1 to 200`)
@@ -106,16 +106,6 @@ export const standCountBody = z.strictObject({
   rowSpacingIn,
 })
 
-const isDate = (s: string) => {
-  try {
-    plantingDayOfYear(s)
-    return true
-  }
-  catch {
-    return false
-  }
-}
-const isoDate = z.string({ error: 'Give a date as YYYY-MM-DD' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Give a date as YYYY-MM-DD').refine(isDate, 'Give a date that exists, as YYYY-MM-DD')
 
 export const replantBody = z.strictObject({
   currentStand: between('Current stand', 0, 100_000),

@@ -1,7 +1,7 @@
 import { MAX_PHOTOS_PER_RECORD } from '../utils/upload-limits'
 import { z } from 'zod'
 import { positive, rowSpacingIn, spacingQualityBody } from './calc'
-import { shortText } from './common'
+import { isoDate, shortText } from './common'
 import { CHECK_KINDS, REVIEW_STATUSES } from '../types/checks'
 
 const recordId = (label: string) => z.number({ error: `${label} must be a record id` }).int(`${label} must be a record id`).positive(`${label} must be a record id`).max(2_147_483_647, `${label} must be a record id`)
@@ -10,8 +10,6 @@ const whole = (label: string, min: number, max: number) => {
   return z.number({ error: msg }).int(msg).min(min, msg).max(max, msg)
 }
 const row = whole('Row', 1, 96)
-const isoDate = z.string({ error: 'Give a date as YYYY-MM-DD' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Give a date as YYYY-MM-DD')
-  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), 'Give a date that exists, as YYYY-MM-DD')
 
 // Links every kind of check shares.
 const links = {

@@ -1,7 +1,7 @@
 import { z } from 'zod'
 import { positive, rowSpacingIn, speedMph } from './calc'
 import { CROPS } from './equipment'
-import { shortText } from './common'
+import { isoDate, shortText } from './common'
 
 export const PLAN_STATUSES = ['draft', 'submitted', 'approved', 'changes-requested', 'set-up', 'planted'] as const
 export type PlanStatus = (typeof PLAN_STATUSES)[number]
@@ -15,11 +15,7 @@ export const PLAN_STATUS_LABELS: Record<PlanStatus, string> = {
   'planted': 'Planted',
 }
 
-const isRealDate = (s: string) => {
-  const d = new Date(`${s}T00:00:00Z`)
-  return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s
-}
-export const isoDate = z.string({ error: 'Give a date as YYYY-MM-DD' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Give a date as YYYY-MM-DD').refine(isRealDate, 'Give a date that exists, as YYYY-MM-DD')
+export { isoDate }
 export const season = z.number({ error: 'Season must be a year' }).int('Season must be a year from 2000 to 2100').min(2000, 'Season must be a year from 2000 to 2100').max(2100, 'Season must be a year from 2000 to 2100')
 const id = (label: string) => z.number({ error: `Choose a ${label}` }).int(`Choose a ${label}`).positive(`Choose a ${label}`).max(2_147_483_647, `Choose a ${label}`)
 const percent = (label: string, min: number) => z.number({ error: `${label} must be a number` }).min(min, `${label} must be from ${min} to 100 %`).max(100, `${label} must be from ${min} to 100 %`)

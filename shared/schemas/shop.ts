@@ -1,9 +1,8 @@
 import { MAX_PHOTOS_PER_RECORD } from '../utils/upload-limits'
 import { z } from 'zod'
-import { shortText } from './common'
+import { isoDate, shortText } from './common'
 
 const optionalText = (max = 200) => shortText(max).nullable().optional()
-const isoDate = z.string({ error: 'Enter a date' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2026-03-15').refine((s) => !Number.isNaN(Date.parse(s)), 'Not a real date')
 
 export const ITEM_RESULTS = ['ok', 'needs-fixing', 'replaced'] as const
 export const WORK_ITEM_STATUSES = ['open', 'in-progress', 'closed'] as const

@@ -271,6 +271,10 @@ describe('seed and capacity planning', () => {
     expect(lines[0]).toBe('crop,variety,lot number,unit,seeds needed,units needed,units on hand,units to order')
     expect(lines[1]).toBe('corn,Test C-1,C-1,80000 seeds,4779200,60,50,10')
     expect(lines[2]).toBe('soybeans,Test S-1,S-1,50 lb,11200000,80,100,0')
+    // A variety typed as a formula is written so a spreadsheet shows it as text (leading quote).
+    await sql(`update seed_lots set variety = '=1+1' where id = $1`, [c.id])
+    const escaped = ((await agronomist.get('/api/seasons/2027/seed-order.csv')).data as string).trim().split(/\r?\n/)
+    expect(escaped[1]).toBe(`corn,"'=1+1",C-1,80000 seeds,4779200,60,50,10`)
 
     const bad = await agronomist.get('/api/seasons/2027/summary?hoursPerDay=0')
     expect(bad.status).toBe(400)

@@ -308,6 +308,10 @@ describe('maintenance log', () => {
     const bad = await ctx.foreman.post(`/api/planters/${ctx.planterId}/service-events`, { servicedOn: '2026-13-40', task: '', nextDueOn: '2020-01-01' })
     expect(bad.status).toBe(400)
     expect(Object.keys(bad.data.data.fields).sort()).toEqual(['nextDueOn', 'servicedOn', 'task'])
+    // 31 February passes Date.parse; it must be a 400 with the field named, not a 500 from PostgreSQL.
+    const noSuchDay = await ctx.foreman.post(`/api/planters/${ctx.planterId}/service-events`, { servicedOn: '2026-02-31', task: 'Chains oiled', nextDueOn: '2027-02-29' })
+    expect(noSuchDay.status).toBe(400)
+    expect(noSuchDay.data.data.fields).toEqual({ servicedOn: 'Give a date that exists, as YYYY-MM-DD', nextDueOn: 'Give a date that exists, as YYYY-MM-DD' })
     expect((await (await ctx.farm.as('operator')).post(`/api/planters/${ctx.planterId}/service-events`, { servicedOn: '2026-04-01', task: 'x' })).status).toBe(403)
     expect((await ctx.foreman.post(`/api/planters/${ctx.planterId}/service-events`, { servicedOn: '2026-04-01', task: 'Chains oiled', intervalAcres: 200 })).status).toBe(201)
     expect((await ctx.foreman.post(`/api/planters/${ctx.planterId}/service-events`, { servicedOn: '2026-04-25', task: 'Bearings greased', intervalAcres: 200 })).status).toBe(201)

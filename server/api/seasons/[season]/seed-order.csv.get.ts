@@ -10,5 +10,6 @@ export default defineEventHandler(async (event) => {
   const data = summary.lots.map((l) => [l.crop, l.variety, l.lotNumber, l.unitKind === 'seeds' ? `${l.unitSize} seeds` : `${l.unitSize} lb`, Math.round(l.seeds), l.unitsNeeded, l.unitsOnHand, l.shortfall])
   setResponseHeader(event, 'content-type', 'text/csv; charset=utf-8')
   setResponseHeader(event, 'content-disposition', `attachment; filename="seed-order-${season}.csv"`)
-  return Papa.unparse({ fields, data })
+  // Variety and lot names are free text: a leading = + - @ must not run as a formula in a spreadsheet.
+  return Papa.unparse({ fields, data }, { escapeFormulae: true })
 })
