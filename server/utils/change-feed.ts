@@ -15,6 +15,11 @@ let live = false
 let stopped = true
 let retryTimer: ReturnType<typeof setTimeout> | undefined
 let retryMs = 500
+let heartbeat: ReturnType<typeof setInterval> | undefined
+// A connection that died without a reset (a dropped NAT entry, a failover) would look alive for
+// hours; a query on it every HEARTBEAT_MS, answered within HEARTBEAT_TIMEOUT_MS, proves it is not.
+const HEARTBEAT_MS = Number(process.env.ROWBENCH_FEED_HEARTBEAT_MS || 10_000)
+const HEARTBEAT_TIMEOUT_MS = Number(process.env.ROWBENCH_FEED_HEARTBEAT_TIMEOUT_MS || 5_000)
 
 export function onDataChange(listener: ChangeListener) {
   listeners.add(listener)
@@ -33,6 +38,7 @@ function announce(table: string) {
 function goDown(reason: string) {
   const wasLive = live
   live = false
+  clearInterval(heartbeat)
   const old = client
   client = undefined
   old?.removeAllListeners()
@@ -63,6 +69,8 @@ async function connect() {
     connectionString: process.env.DATABASE_URL || useRuntimeConfig().databaseUrl,
     application_name: 'rowbench-change-feed',
     keepAlive: true,
+    keepAliveInitialDelayMillis: 10_000,
+    query_timeout: HEARTBEAT_TIMEOUT_MS,
   })
   client = next
   next.on('error', (err) => goDown(err.message))
@@ -82,6 +90,12 @@ async function connect() {
     live = true
     // Anything kept while the feed was down is suspect.
     announce(ANY_TABLE)
+    clearInterval(heartbeat)
+    heartbeat = setInterval(() => {
+      if (client !== next) return
+      next.query('select 1').catch((err: Error) => { if (client === next) goDown(`no answer to the heartbeat: ${err.message}`) })
+    }, HEARTBEAT_MS)
+    heartbeat.unref?.()
   } catch (err) {
     if (client === next) goDown((err as Error).message)
   }
@@ -96,6 +110,7 @@ export function startChangeFeed() {
 export async function stopChangeFeed() {
   stopped = true
   clearTimeout(retryTimer)
+  clearInterval(heartbeat)
   const old = client
   client = undefined
   live = false

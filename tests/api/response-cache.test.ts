@@ -135,4 +135,31 @@ describe('cached list pages', () => {
       await other.stop()
     }
   }, 60_000)
+
+  it('notices a feed connection that hangs without closing, stops caching, and resumes when it answers again', async () => {
+    const databaseName = new URL(inject('databaseUrl')).pathname.slice(1)
+    const feeds = async () => (await sql<{ pid: number }>(`select pid from pg_stat_activity where application_name = 'rowbench-change-feed' and datname = current_database()`)).map((r) => r.pid)
+    const before = new Set(await feeds())
+    const other = await startTestServer({ database: databaseName, fresh: false, port: 3186, smtpPort: 2596, env: { ROWBENCH_FEED_HEARTBEAT_MS: '200', ROWBENCH_FEED_HEARTBEAT_TIMEOUT_MS: '500' } })
+    let stopped: number | undefined
+    try {
+      const { farm } = await farmWithPlate()
+      const foreman = new Client(other.baseUrl)
+      expect((await foreman.post('/api/auth/login', { email: farm.users.foreman.email, password: TEST_PASSWORD })).status).toBe(200)
+      await eventually(() => foreman.get('/api/plates'), (r) => cacheState(r) === 'hit', 15_000)
+      const [pid] = (await feeds()).filter((p) => !before.has(p))
+      expect(pid).toBeGreaterThan(0)
+      // The backend stops answering but its socket stays open: no error, no close, only silence.
+      process.kill(pid!, 'SIGSTOP')
+      stopped = pid
+      const { ms } = await eventually(() => foreman.get('/api/plates'), (r) => cacheState(r) === 'off', 5_000)
+      expect(ms).toBeLessThan(5_000)
+      process.kill(pid!, 'SIGCONT')
+      stopped = undefined
+      await eventually(() => foreman.get('/api/plates'), (r) => cacheState(r) === 'hit', 15_000)
+    } finally {
+      if (stopped) process.kill(stopped, 'SIGCONT')
+      await other.stop()
+    }
+  }, 60_000)
 })
