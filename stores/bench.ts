@@ -10,14 +10,38 @@ export const useBenchStore = defineStore('bench', () => {
   const name = ref('')
   const config = ref<SetupConfig | null>(null)
   const metric = ref(false)
+  // Whose work this is ("user:farm"), so a different account or farm never finds it.
+  const owner = ref<string | null>(null)
+  // The config as loaded or last saved, to tell kept edits from a copy the server already has.
+  const savedJson = ref<string | null>(null)
 
-  function start(input: { planterId: number, config: SetupConfig, setupId?: number | null, baseRevision?: number | null, name?: string }) {
+  function start(input: { planterId: number, config: SetupConfig, setupId?: number | null, baseRevision?: number | null, name?: string, owner?: string | null }) {
     planterId.value = input.planterId
     config.value = structuredClone(toRaw(input.config))
     setupId.value = input.setupId ?? null
     baseRevision.value = input.baseRevision ?? null
     name.value = input.name ?? ''
+    owner.value = input.owner ?? null
+    savedJson.value = JSON.stringify(config.value)
   }
+
+  function markSaved() {
+    savedJson.value = config.value ? JSON.stringify(config.value) : null
+  }
+
+  // Forget the work on a farm switch or a sign-out; the unit preference stays unless asked.
+  function reset(options: { preferences?: boolean } = {}) {
+    planterId.value = null
+    setupId.value = null
+    baseRevision.value = null
+    name.value = ''
+    config.value = null
+    owner.value = null
+    savedJson.value = null
+    if (options.preferences) metric.value = false
+  }
+
+  const edited = computed(() => !!config.value && JSON.stringify(config.value) !== savedJson.value)
 
   // What the server would refuse, shown as the user types instead of after a failed save.
   const problems = computed(() => {
@@ -35,5 +59,5 @@ export const useBenchStore = defineStore('bench', () => {
     }
   })
 
-  return { planterId, setupId, baseRevision, name, config, metric, start, results, problems }
+  return { planterId, setupId, baseRevision, name, config, metric, owner, start, markSaved, reset, edited, results, problems }
 })
