@@ -53,9 +53,12 @@ async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: Rev
   const rowSpacingIn = body.rowSpacingIn ?? rev.config.rowSpacingIn
   const target = plan.targetSeedsPerAcre ?? rev.config.targetSeedsPerAcre
   const [planter] = await useDb().select({ slipPercent: planters.slipPercent }).from(planters).where(and(eq(planters.id, rev.planterId), eq(planters.farmId, member.farmId)))
+  // Compared with the sections of the rows counted, not the planter's mean: with sections at
+  // different rates the mean would read as slip.
+  const setupSeedsPerAcre = seedsPerAcreOnRows(rev.config, rev.results, body.rows.map((r) => r.row))
   const s = seedDropSummary({
     rows: body.rows, lengthFt: body.lengthFt, wheelRevolutions: body.wheelRevolutions, rowSpacingIn, wheelCircumferenceIn: rev.config.wheelCircumferenceIn,
-    setupSeedsPerAcre: rev.results.seedsPerAcre, setupSlipPercent: rev.config.slipPercent, targetSeedsPerAcre: target, planterSlipPercent: planter?.slipPercent ?? rev.config.slipPercent,
+    setupSeedsPerAcre, setupSlipPercent: rev.config.slipPercent, targetSeedsPerAcre: target, planterSlipPercent: planter?.slipPercent ?? rev.config.slipPercent,
   })
   const fix: SeedDropResults['fix'] = { solverTargetSeedsPerAcre: s.solverTargetSeedsPerAcre, choices: [], message: null }
   if (!s.solverTargetSeedsPerAcre) fix.message = 'No seed was counted, so no corrected choice can be worked out. Check that the meters turn and the hoppers feed.'
@@ -74,7 +77,7 @@ async function seedDropResults(member: Member, body: SeedDropCheckBody, rev: Rev
   const { solverTargetSeedsPerAcre: _t, ...summary } = s
   return {
     ...summary, rowSpacingIn,
-    setupSeedsPerAcre: rev.results.seedsPerAcre,
+    setupSeedsPerAcre,
     targetSeedsPerAcre: target,
     targetFrom: plan.targetSeedsPerAcre ? 'plan' : 'setup',
     setupSlipPercent: rev.config.slipPercent,
@@ -95,7 +98,7 @@ async function standCountResults(member: Member, body: StandCountCheckBody, rev:
       .where(and(eq(fieldChecks.farmId, member.farmId), eq(fieldChecks.kind, 'seed-drop'), eq(fieldChecks.setupId, rev.setupId), eq(fieldChecks.setupRevision, rev.revision)))
       .orderBy(desc(fieldChecks.id)).limit(1)
     if (drop) {
-      seedsDroppedPerAcre = (drop.results as SeedDropResults).seedsPerAcre
+      seedsDroppedPerAcre = seedsOnGroundPerAcre(drop.results as SeedDropResults)
       seedsDroppedFrom = `seed-drop check ${drop.id}`
     } else {
       seedsDroppedPerAcre = rev.results.seedsPerAcre

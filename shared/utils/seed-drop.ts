@@ -63,3 +63,10 @@ export function seedDropSummary(input: SeedDropInput): SeedDropSummary {
     solverTargetSeedsPerAcre: found.isZero() ? 0 : new Decimal(input.targetSeedsPerAcre).mul(keep(input.planterSlipPercent)).div(keep(input.setupSlipPercent).mul(found)).toNumber(),
   }
 }
+
+// Seed on the ground from a stored seed-drop check: a count over a measured length already is;
+// one over wheel turns measured the drive at 0 % slip, so it is × (1 − setup slip ÷ 100).
+export function seedsOnGroundPerAcre(check: { basis: 'length' | 'revolutions', seedsPerAcre: number, setupSlipPercent: number }): number {
+  if (check.basis !== 'revolutions') return check.seedsPerAcre
+  return new Decimal(check.seedsPerAcre).mul(new Decimal(1).minus(new Decimal(check.setupSlipPercent).div(100))).toNumber()
+}

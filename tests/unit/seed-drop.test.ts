@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
-import { seedDropSummary } from '../../shared/utils/seed-drop'
+import { seedDropSummary, seedsOnGroundPerAcre } from '../../shared/utils/seed-drop'
 
 const base = { rowSpacingIn: 30, wheelCircumferenceIn: 86.4, setupSeedsPerAcre: 34_000, setupSlipPercent: 0, targetSeedsPerAcre: 34_000, planterSlipPercent: 0 }
 
@@ -43,6 +43,14 @@ describe('seed-drop check', () => {
     const s = seedDropSummary({ ...base, setupSeedsPerAcre: atZero * 0.97, setupSlipPercent: 3, planterSlipPercent: 3, rows: [{ row: 1, seedsCounted: 20 }], lengthFt: 17.42 })
     expect(Math.abs(s.impliedSlipPercent!)).toBeLessThan(1e-9)
     expect(s.slipStorable).toBe(true)
+  })
+
+  it('seed on the ground from a stored check: a length count as counted, a wheel-turn count less the setup slip (36,000 at 5 % → 34,200; computed)', () => {
+    expect(seedsOnGroundPerAcre({ basis: 'length', seedsPerAcre: 33_000, setupSlipPercent: 5 })).toBe(33_000)
+    expect(seedsOnGroundPerAcre({ basis: 'revolutions', seedsPerAcre: 36_000, setupSlipPercent: 5 })).toBe(34_200)
+    // Over wheel turns the summary's own on-the-ground figure agrees: 33,880 × 0.96 = 32,524.8.
+    const s = seedDropSummary({ ...base, setupSlipPercent: 4, rows: [{ row: 3, seedsCounted: 140 }], wheelRevolutions: 10 })
+    expect(seedsOnGroundPerAcre({ ...s, setupSlipPercent: 4 })).toBeCloseTo(32_524.8, 8)
   })
 
   it('the solver target times what the check found lands on the target (property)', () => {

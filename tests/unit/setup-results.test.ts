@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
-import { computeSetupResults } from '../../shared/utils/setup-results'
+import { computeSetupResults, seedsPerAcreOnRows } from '../../shared/utils/setup-results'
 import type { SetupConfig, SetupRowUnit, SetupSection } from '../../shared/types/setup'
 
 function unit(position: number, planting = true): SetupRowUnit {
@@ -101,5 +101,23 @@ describe('computeSetupResults', () => {
       expect(two.seedsPerAcre / one.seedsPerAcre).toBeCloseTo(2, 9)
       expect(one.seedsPerAcre * one.seedSpacingIn * a.rowSpacing).toBeCloseTo(6_272_640, 3)
     }), { numRuns: 200 })
+  })
+})
+
+describe('seedsPerAcreOnRows', () => {
+  // Two sections at different rates (computed results stand in as plain figures here).
+  const config = { sections: [{ rows: [1, 2] }, { rows: [3, 4] }] } as unknown as Pick<SetupConfig, 'sections'>
+  const results = { sections: [{ seedsPerAcre: 32_000 }, { seedsPerAcre: 36_000 }], seedsPerAcre: 34_000 } as never
+
+  it('a check on one section\'s rows expects that section\'s rate, not the planter mean (computed)', () => {
+    expect(seedsPerAcreOnRows(config, results, [1])).toBe(32_000)
+    expect(seedsPerAcreOnRows(config, results, [3, 4])).toBe(36_000)
+  })
+
+  it('rows of both sections average row by row; a row in no section and no rows fall back to the mean', () => {
+    // (32,000 + 32,000 + 36,000) ÷ 3 = 33,333.3
+    expect(seedsPerAcreOnRows(config, results, [1, 2, 3])).toBeCloseTo(100_000 / 3, 6)
+    expect(seedsPerAcreOnRows(config, results, [9])).toBe(34_000)
+    expect(seedsPerAcreOnRows(config, results, [])).toBe(34_000)
   })
 })
