@@ -247,6 +247,13 @@ export async function transitionPlan(member: Member, id: number, body: Transitio
       }
       const setup = await latestOf(plan.setupId)
       if (!setup) throw createError({ statusCode: 409, message: 'The proposed setup no longer exists; ask for changes instead' })
+      // The plan may have changed planter or crop since the proposal (an edit reopens it).
+      if ((plan.planterId && setup.planterId !== plan.planterId) || setup.crop !== plan.crop) {
+        throw createError({ statusCode: 409, message: 'The proposed setup is for another planter or crop than the plan now has; ask for changes so a matching setup is proposed' })
+      }
+      if (body.setupRevision !== undefined && body.setupRevision !== setup.latestRevision) {
+        throw createError({ statusCode: 409, message: `Revision ${setup.latestRevision} of the setup was saved after the revision ${body.setupRevision} you reviewed; look at it before approving` })
+      }
       revision = setup.latestRevision
       set = { approvedRevision: revision, approvedBy: member.user.id, approvedAt: new Date() }
     } else if (body.to === 'changes-requested') {

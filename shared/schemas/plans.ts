@@ -68,6 +68,8 @@ export const transitionBody = z.strictObject({
   to: z.enum(PLAN_STATUSES, { error: 'Choose the status to move the plan to' }),
   comment: shortText(2000).optional(),
   setupId: id('setup').optional(),
+  // On approval: the setup revision the reviewer looked at; a newer one is refused (409).
+  setupRevision: z.number({ error: 'Give the setup revision you reviewed' }).int('Give the setup revision you reviewed').positive('Give the setup revision you reviewed').max(1_000_000, 'Give the setup revision you reviewed').optional(),
   plantedOn: isoDate.optional(),
   plantedAcres: positive('Planted acres', 100_000).optional(),
 })

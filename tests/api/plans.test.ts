@@ -163,6 +163,27 @@ describe('crop plans', () => {
     expect((await agronomist.delete(`/api/plans/${plan.id}`)).status).toBe(409)
   })
 
+  it('approval names the revision reviewed, and never lands a setup on a plan that moved to another planter', async () => {
+    const plan = await newPlan()
+    const path = `/api/plans/${plan.id}/transition`
+    await operator.post(path, { to: 'submitted', setupId: eq.setup })
+    const [{ latest_revision: seen }] = await sql<{ latest_revision: number }>('select latest_revision from setups where id = $1', [eq.setup]) as [{ latest_revision: number }]
+    // A revision saved while the plan waited: approving what was looked at is refused.
+    expect((await foreman.post(`/api/setups/${eq.setup}/revisions`, { baseRevision: seen, config: { ...JSON.parse(eq.config), targetSeedsPerAcre: 33_500 }, note: 'While it waited' })).status).toBe(201)
+    const stale = await agronomist.post(path, { to: 'approved', setupRevision: seen })
+    expect(stale.status).toBe(409)
+    expect(stale.data.message).toContain(`Revision ${seen + 1}`)
+    expect((await agronomist.post(path, { to: 'approved', setupRevision: seen + 1 })).data).toMatchObject({ status: 'approved', approvedRevision: seen + 1 })
+    // Moved to another planter after approval: back to review, and the old planter's setup cannot be approved.
+    const [other] = await sql<{ id: number }>(`insert into planters (farm_id, name, frame_kind, row_count, row_spacing_in, wheel_circumference_in) values ($1, 'Other bar', 'toolbar', 8, 30, 86) returning id`, [farm.farmId])
+    expect((await agronomist.patch(`/api/plans/${plan.id}`, { planterId: other!.id })).data).toMatchObject({ status: 'submitted' })
+    const mismatched = await owner.post(path, { to: 'approved' })
+    expect(mismatched.status).toBe(409)
+    expect(mismatched.data.message).toMatch(/another planter or crop/)
+    const [row] = await sql<{ status: string, approved_revision: number | null }>('select status, approved_revision from crop_plans where id = $1', [plan.id])
+    expect(row).toEqual({ status: 'submitted', approved_revision: null })
+  })
+
   it('changing the target after approval also sends the plan back to review', async () => {
     const plan = await newPlan()
     const path = `/api/plans/${plan.id}/transition`
