@@ -47,3 +47,12 @@ export function localIsoDate(d: Date = new Date()): string {
   const pad = (n: number) => String(n).padStart(2, '0')
   return `${String(d.getFullYear()).padStart(4, '0')}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`
 }
+
+// How close a computed rate lands to its target, in a word as well as a colour: within 2 % on
+// target, within 5 % worth a check, beyond that off (the bench's own bands).
+export function rateStatus(errorPercent: number): { tone: 'good' | 'warn' | 'bad', word: string } {
+  const off = Math.abs(errorPercent)
+  if (off <= 2) return { tone: 'good', word: 'on target' }
+  if (off <= 5) return { tone: 'warn', word: 'check' }
+  return { tone: 'bad', word: 'off target' }
+}

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
-import { fmtDay, fmtInt, fmtLabel, fmtMoney, fmtQty, localIsoDate } from '../../shared/utils/format'
+import { fmtDay, fmtInt, fmtLabel, fmtMoney, fmtQty, localIsoDate, rateStatus } from '../../shared/utils/format'
 
 // Display formatting only (no published source needed): en-US month names and separators.
 describe('fmtDay', () => {
@@ -69,5 +69,16 @@ describe('localIsoDate', () => {
     } finally {
       vi.useRealTimers()
     }
+  })
+})
+
+describe('rateStatus', () => {
+  it('names the band in a word beside its tone, the same on either side of the target', () => {
+    expect(rateStatus(0)).toEqual({ tone: 'good', word: 'on target' })
+    expect(rateStatus(-2)).toEqual({ tone: 'good', word: 'on target' })
+    expect(rateStatus(2.01)).toEqual({ tone: 'warn', word: 'check' })
+    expect(rateStatus(-5)).toEqual({ tone: 'warn', word: 'check' })
+    expect(rateStatus(5.5)).toEqual({ tone: 'bad', word: 'off target' })
+    expect(rateStatus(-23.5)).toEqual({ tone: 'bad', word: 'off target' })
   })
 })
