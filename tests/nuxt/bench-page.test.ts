@@ -1,5 +1,6 @@
 import { beforeEach, describe, expect, it, vi } from 'vitest'
 import { mountSuspended, registerEndpoint } from '@nuxt/test-utils/runtime'
+import { createError } from 'h3'
 import type { VueWrapper } from '@vue/test-utils'
 import { signInAs } from './signed-in'
 import type { SetupConfig } from '../../shared/types/setup'
@@ -81,7 +82,7 @@ describe('Setup bench', () => {
 
   it('falls back to the first planter when the stored planter cannot be loaded', async () => {
     registerEndpoint('/api/planters/42', () => {
-      throw new Error('gone')
+      throw createError({ statusCode: 404, statusMessage: 'Planter not found' })
     })
     useBenchStore().start({ planterId: 42, config: config(28_000), owner: '3:1' })
     const wrapper = await mountBench('/bench')

@@ -1,8 +1,14 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
-import { mountSuspended } from '@nuxt/test-utils/runtime'
+import { mountSuspended, registerEndpoint } from '@nuxt/test-utils/runtime'
 import type { VueWrapper } from '@vue/test-utils'
 import ApplicationRecordForm from '../../components/application/RecordForm.vue'
 import ChecksReplantAid from '../../components/checks/ReplantAid.vue'
+import PlanReview from '../../components/plan/Review.vue'
+import MaintenancePage from '../../pages/shop/maintenance.vue'
+import { signInAs } from './signed-in'
+
+registerEndpoint('/api/planters', () => [{ id: 1, name: 'North' }])
+registerEndpoint('/api/planters/1/maintenance', () => ({ planter: { id: 1, name: 'North' }, acresPlanted: 0, plantings: [], events: [], due: [] }))
 
 // 22:30 on May 12 in Iowa (CDT, UTC−5) is already 03:30 on May 13 in UTC.
 const IOWA_EVENING = new Date('2027-05-13T03:30:00Z')
@@ -38,5 +44,18 @@ describe('the day a form starts on is the local day', () => {
     const wrapper = await mountSuspended(ChecksReplantAid, { props: { stand: 28_000 } })
     expect(valueOf(wrapper, 'Planted on')).toBe('2026-05-01')
     expect(valueOf(wrapper, 'Replant date')).toBe('2026-05-22')
+  })
+
+  it('records planting on the local day', async () => {
+    signInAs('operator')
+    const plan = { id: 5, status: 'set-up' as const, setupId: 1, planterId: 1, crop: 'corn', fieldAcres: 80, proposedBy: null }
+    const wrapper = await mountSuspended(PlanReview, { props: { plan } })
+    expect(valueOf(wrapper, 'Planted on')).toBe('2027-05-12')
+  })
+
+  it('logs a service on the local day', async () => {
+    signInAs('foreman')
+    const wrapper = await mountSuspended(MaintenancePage, { route: '/shop/maintenance?planter=1' })
+    expect(valueOf(wrapper, 'Serviced on')).toBe('2027-05-12')
   })
 })
