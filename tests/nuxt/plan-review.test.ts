@@ -11,6 +11,12 @@ const SETUPS = [
   { id: 2, name: 'North beans', planterId: 10, crop: 'soybeans', planterName: 'North', latestRevision: 1 },
   { id: 3, name: 'Creek corn', planterId: 20, crop: 'corn', planterName: 'Creek', latestRevision: 4 },
 ]
+const transitions: Record<string, unknown>[] = []
+registerEndpoint('/api/plans/6/transition', { method: 'POST', handler: async (event) => {
+  const { readBody } = await import('h3')
+  transitions.push(await readBody(event))
+  return {}
+} })
 registerEndpoint('/api/setups', (event) => {
   const q = getQuery(event)
   asked.push(`${q.planterId}-${q.crop}`)
@@ -45,5 +51,14 @@ describe('PlanReview', () => {
     await wrapper.setProps({ plan: { ...plan, crop: 'soybeans' } })
     await vi.waitFor(() => expect(wrapper.find('select').element.value).toBe('0'))
     expect(wrapper.find('button').attributes('disabled')).toBeDefined()
+  })
+
+  it('approves the setup revision the page shows, so a newer one saved meanwhile is refused', async () => {
+    signInAs('agronomist')
+    const waiting = { ...plan, id: 6, status: 'submitted' as const, setupId: 1, setupLatestRevision: 2, proposedBy: 999 }
+    const wrapper = await mountSuspended(PlanReview, { props: { plan: waiting } })
+    const approve = wrapper.findAll('button').find((b) => b.text() === 'Approve')!
+    await approve.trigger('click')
+    await vi.waitFor(() => expect(transitions).toEqual([{ to: 'approved', setupRevision: 2 }]))
   })
 })
