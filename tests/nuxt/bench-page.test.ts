@@ -2,19 +2,10 @@ import { beforeEach, describe, expect, it, vi } from 'vitest'
 import { mountSuspended, registerEndpoint } from '@nuxt/test-utils/runtime'
 import { createError } from 'h3'
 import type { VueWrapper } from '@vue/test-utils'
-import { signInAs } from './signed-in'
-import type { SetupConfig } from '../../shared/types/setup'
+import { fourRowConfig, signInAs } from './signed-in'
 import BenchPage from '../../pages/bench.vue'
 
-const range = (from: number, to: number) => Array.from({ length: to - from + 1 }, (_, i) => from + i)
-const config = (targetSeedsPerAcre: number): SetupConfig => ({
-  crop: 'corn', targetSeedsPerAcre, rowSpacingIn: 30, speedMph: null, wheelCircumferenceIn: 60, slipPercent: 0, meterRatio: 1,
-  sections: [{ sectionId: null, name: 'Main drive', rows: range(1, 4), seedPlateId: null, plateCode: null, cellsPerPlate: 10, stages: [{ position: 1, driverTeeth: 20, drivenTeeth: 20 }] }],
-  rowUnits: range(1, 4).map((position) => ({
-    position, opener: 'double-disc', gaugeWheels: null, depthIn: 1.75, depthBand: null, downPressureLb: null, pressWheel: 'open-center', pressWheelWidthIn: null,
-    covering: 'none', furrower: false, seedPlateId: null, granular: 'none', granularBandWidthIn: null, granularDialSetting: null, fertilizerSetting: null, planting: true,
-  })),
-})
+const config = fourRowConfig
 
 const calls = { setup: 0, draft: 0 }
 registerEndpoint('/api/planters', () => [{ id: 1, name: 'Test four-row' }])

@@ -3,21 +3,11 @@ import { mountSuspended, registerEndpoint } from '@nuxt/test-utils/runtime'
 import BenchResults from '../../components/bench/Results.vue'
 import DashboardSetupsPanel from '../../components/dashboard/SetupsPanel.vue'
 import PlanterToolbar from '../../components/planter/Toolbar.vue'
-import type { SetupConfig } from '../../shared/types/setup'
 import type { RowUnit } from '../../shared/types/equipment'
 import { computeSetupResults } from '../../shared/utils/setup-results'
-import { signInAs } from './signed-in'
+import { fourRowConfig, signInAs } from './signed-in'
 
-const range = (from: number, to: number) => Array.from({ length: to - from + 1 }, (_, i) => from + i)
-// A 60 in wheel at 1:1 with 10 cells drops a seed every 6 in: 34,848 seeds/acre at 30 in (computed).
-const config = (targetSeedsPerAcre: number): SetupConfig => ({
-  crop: 'corn', targetSeedsPerAcre, rowSpacingIn: 30, speedMph: null, wheelCircumferenceIn: 60, slipPercent: 0, meterRatio: 1,
-  sections: [{ sectionId: null, name: 'Main drive', rows: range(1, 4), seedPlateId: null, plateCode: null, cellsPerPlate: 10, stages: [{ position: 1, driverTeeth: 20, drivenTeeth: 20 }] }],
-  rowUnits: range(1, 4).map((position) => ({
-    position, opener: 'double-disc', gaugeWheels: null, depthIn: 1.75, depthBand: null, downPressureLb: null, pressWheel: 'open-center', pressWheelWidthIn: null,
-    covering: 'none', furrower: false, seedPlateId: null, granular: 'none', granularBandWidthIn: null, granularDialSetting: null, fertilizerSetting: null, planting: true,
-  })),
-})
+const config = fourRowConfig
 
 describe('rate badges say their state in words', () => {
   it('on the bench: on target, check, off target', async () => {
