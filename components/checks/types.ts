@@ -9,4 +9,6 @@ export interface CheckContext {
   theoreticalIn: number | null
   targetSeedsPerAcre: number | null
   seedsPerAcre: number | null
+  // Each drive section's rows and computed rate, so a count is compared with its own rows' sections.
+  sections: { rows: number[], seedsPerAcre: number }[]
 }

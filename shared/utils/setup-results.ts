@@ -60,7 +60,7 @@ export function computeSetupResults(config: SetupConfig, plateRpmLimit?: number)
 
 // The rate a check on some rows should find: the mean of those rows' sections (results.sections is
 // in config.sections' order); a row in no section counts at the planter's mean.
-export function seedsPerAcreOnRows(config: Pick<SetupConfig, 'sections'>, results: Pick<SetupResults, 'sections' | 'seedsPerAcre'>, rows: number[]): number {
+export function seedsPerAcreOnRows(config: { sections: { rows: number[] }[] }, results: { sections: { seedsPerAcre: number }[], seedsPerAcre: number }, rows: number[]): number {
   if (!rows.length) return results.seedsPerAcre
   const rateOf = (row: number) => {
     const i = config.sections.findIndex((sec) => sec.rows.includes(row))

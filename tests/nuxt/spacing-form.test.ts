@@ -4,7 +4,7 @@ import { mountSuspended } from '@nuxt/test-utils/runtime'
 import ChecksSpacingForm from '../../components/checks/SpacingForm.vue'
 
 // The histogram draws on a canvas, which the test DOM lacks; the indices show the values were read.
-const context = { setupId: null, setupRevision: null, fieldId: null, planId: null, crop: 'corn', rowSpacingIn: 30, theoreticalIn: 6, targetSeedsPerAcre: null, seedsPerAcre: null }
+const context = { setupId: null, setupRevision: null, fieldId: null, planId: null, crop: 'corn', rowSpacingIn: 30, theoreticalIn: 6, targetSeedsPerAcre: null, seedsPerAcre: null, sections: [] }
 const TABLE = 'row,spacing_in,note\n1,6.1,\n1,5.9,double?\n1,6.2,\n'
 
 async function choose(wrapper: VueWrapper, file: File) {
