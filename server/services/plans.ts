@@ -276,8 +276,23 @@ export async function transitionPlan(member: Member, id: number, body: Transitio
   return getPlan(member, id)
 }
 
-// A new revision of a setup that an approved (or set-up) plan relies on sends that plan back to review.
+// A new revision of a setup that an approved (or set-up) plan relies on sends that plan back to review;
+// a plan still waiting for review notes the revision in its history and tells its reviewers.
 export async function setupRevised(tx: Tx, member: Member, setupId: number, revision: number) {
+  const waiting = await tx.select({ plan: cropPlans, fieldName: fields.name }).from(cropPlans)
+    .innerJoin(fields, eq(fields.id, cropPlans.fieldId))
+    .where(and(eq(cropPlans.setupId, setupId), eq(cropPlans.farmId, member.farmId), eq(cropPlans.status, 'submitted')))
+  for (const { plan, fieldName } of waiting) {
+    await tx.insert(planEvents).values({ planId: plan.id, fromStatus: 'submitted', toStatus: 'submitted', setupRevision: revision, comment: `Revision ${revision} of the setup was saved while the plan waited for review`, userId: member.user.id })
+    const what = `${fieldName} (${plan.crop}, ${plan.season})`
+    const reviewers = (await concerned(tx, member.farmId, null, member.user.id))
+    await queueMail(reviewers.map((u) => ({
+      farmId: member.farmId,
+      to: u.email,
+      subject: `Crop plan ${what}: the setup waiting for review changed`,
+      text: `Hello ${u.name},\n\n${member.user.name} saved revision ${revision} of the setup proposed for ${what} while it waited for your review. Look at revision ${revision} before approving.\n\nOpen the plan: ${appUrl(`/plans/${plan.id}`)}\n`,
+    })), tx)
+  }
   const affected = await tx.select().from(cropPlans)
     .where(and(eq(cropPlans.setupId, setupId), eq(cropPlans.farmId, member.farmId), inArray(cropPlans.status, ['approved', 'set-up']))).for('update')
   for (const plan of affected) {

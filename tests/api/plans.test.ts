@@ -170,6 +170,10 @@ describe('crop plans', () => {
     const [{ latest_revision: seen }] = await sql<{ latest_revision: number }>('select latest_revision from setups where id = $1', [eq.setup]) as [{ latest_revision: number }]
     // A revision saved while the plan waited: approving what was looked at is refused.
     expect((await foreman.post(`/api/setups/${eq.setup}/revisions`, { baseRevision: seen, config: { ...JSON.parse(eq.config), targetSeedsPerAcre: 33_500 }, note: 'While it waited' })).status).toBe(201)
+    const waiting = (await agronomist.get(`/api/plans/${plan.id}`)).data
+    expect(waiting.status).toBe('submitted')
+    expect(waiting.events.at(-1)).toMatchObject({ fromStatus: 'submitted', toStatus: 'submitted', setupRevision: seen + 1, userId: farm.users.foreman.id })
+    await waitForMail((m) => m.to.includes(farm.users.agronomist.email) && m.text.includes(`/plans/${plan.id}`) && m.text.includes(`revision ${seen + 1}`) && /while it waited/.test(m.text))
     const stale = await agronomist.post(path, { to: 'approved', setupRevision: seen })
     expect(stale.status).toBe(409)
     expect(stale.data.message).toContain(`Revision ${seen + 1}`)
