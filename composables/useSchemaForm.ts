@@ -29,5 +29,20 @@ export function useSchemaForm<S extends z.ZodObject>(schema: S, state: Record<st
     serverErrors.value = apiError(err).fields
   }
 
-  return { v$, errorOf, validate, takeServerErrors }
+  // Checks the form (unless told not to), then runs the request with `busy` set; a refusal's field
+  // messages land beside their fields, its message in the toast.
+  const busy = ref(false)
+  async function submit(action: () => Promise<unknown>, options: { validateFirst?: boolean } = {}) {
+    if (options.validateFirst !== false && !(await validate())) return
+    busy.value = true
+    try {
+      await action()
+    } catch (err) {
+      takeServerErrors(err)
+    } finally {
+      busy.value = false
+    }
+  }
+
+  return { v$, errorOf, validate, takeServerErrors, busy, submit }
 }

@@ -128,9 +128,13 @@ export async function assertFarmUploads(tx: Tx, farmId: number, ids: number[], a
   return ok
 }
 
-// Keeps what schema UPLOAD_REFERENCES lists.
-const unreferenced = sql`not exists (select 1 from field_checks c where c.csv_upload_id = u.id or u.id = any(c.photo_upload_ids))
-  and not exists (select 1 from inspection_items i where u.id = any(i.photo_upload_ids))`
+// No record names upload `u`: one test per column of the schema's UPLOAD_REFERENCES (an *_ids
+// column holds an array of ids), so the list is the only place that knows them.
+const unreferenced = sql.join(schema.UPLOAD_REFERENCES.map((ref) => {
+  const [table, column] = ref.split('.') as [string, string]
+  const names = column.endsWith('_ids') ? `u.id = any(r.${column})` : `r.${column} = u.id`
+  return sql.raw(`not exists (select 1 from ${table} r where ${names})`)
+}), sql` and `)
 
 export async function sweepOrphanUploads(graceHours: number): Promise<number> {
   const removed = await useDb().transaction(async (tx) => {

@@ -110,6 +110,23 @@ interface Case {
   prepare: (a: TestFarm, b: TestFarm) => Promise<Prepared>
 }
 
+// A new setup of farm A's planter whose config names one record of farm B (a plate or a drive
+// section) at `field`; the same request with A's own record is the control.
+function newSetupNaming(field: string, key: 'plate' | 'section', table: Watch[0], put: (config: ReturnType<typeof configOf>, id: number) => void): Case {
+  return {
+    role: 'operator', field,
+    prepare: async (a, b) => {
+      const [ea, eb] = [await equipment(a), await equipment(b)]
+      const body = (id: number) => {
+        const config = configOf(ea)
+        put(config, id)
+        return { planterId: ea.planter, name: 'Cross', config }
+      }
+      return { method: 'POST', path: '/api/setups', foreign: body(eb[key]), own: body(ea[key]), watch: [[table, eb[key]]] }
+    },
+  }
+}
+
 const CASES: Record<string, Case> = {
   'POST /api/checks with another farm\'s setupId': {
     role: 'operator', field: 'setupId',
@@ -238,42 +255,9 @@ const CASES: Record<string, Case> = {
       return { method: 'POST', path: '/api/setups', foreign: body(eb.planter), own: body(ea.planter), watch: [['planters', eb.planter]] }
     },
   },
-  'POST /api/setups with another farm\'s seedPlateId on a section': {
-    role: 'operator', field: 'config.sections.0.seedPlateId',
-    prepare: async (a, b) => {
-      const [ea, eb] = [await equipment(a), await equipment(b)]
-      const body = (plate: number) => {
-        const config = configOf(ea)
-        config.sections[0].seedPlateId = plate
-        return { planterId: ea.planter, name: 'Cross', config }
-      }
-      return { method: 'POST', path: '/api/setups', foreign: body(eb.plate), own: body(ea.plate), watch: [['seed_plates', eb.plate]] }
-    },
-  },
-  'POST /api/setups with another farm\'s seedPlateId on a row unit': {
-    role: 'operator', field: 'config.rowUnits.0.seedPlateId',
-    prepare: async (a, b) => {
-      const [ea, eb] = [await equipment(a), await equipment(b)]
-      const body = (plate: number) => {
-        const config = configOf(ea)
-        config.rowUnits[0].seedPlateId = plate
-        return { planterId: ea.planter, name: 'Cross', config }
-      }
-      return { method: 'POST', path: '/api/setups', foreign: body(eb.plate), own: body(ea.plate), watch: [['seed_plates', eb.plate]] }
-    },
-  },
-  'POST /api/setups with another farm\'s sectionId': {
-    role: 'operator', field: 'config.sections.0.sectionId',
-    prepare: async (a, b) => {
-      const [ea, eb] = [await equipment(a), await equipment(b)]
-      const body = (section: number) => {
-        const config = configOf(ea)
-        config.sections[0].sectionId = section
-        return { planterId: ea.planter, name: 'Cross', config }
-      }
-      return { method: 'POST', path: '/api/setups', foreign: body(eb.section), own: body(ea.section), watch: [['drive_sections', eb.section]] }
-    },
-  },
+  'POST /api/setups with another farm\'s seedPlateId on a section': newSetupNaming('config.sections.0.seedPlateId', 'plate', 'seed_plates', (c, id) => { c.sections[0].seedPlateId = id }),
+  'POST /api/setups with another farm\'s seedPlateId on a row unit': newSetupNaming('config.rowUnits.0.seedPlateId', 'plate', 'seed_plates', (c, id) => { c.rowUnits[0].seedPlateId = id }),
+  'POST /api/setups with another farm\'s sectionId': newSetupNaming('config.sections.0.sectionId', 'section', 'drive_sections', (c, id) => { c.sections[0].sectionId = id }),
   'POST /api/setups/:id/revisions with another farm\'s seedPlateId': {
     role: 'operator', field: 'config.sections.0.seedPlateId',
     prepare: async (a, b) => {
